@@ -24,6 +24,7 @@ export default defineConfig({
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/integration/global-setup.ts"],
+          setupFiles: ["tests/integration/setup.ts"],
           fileParallelism: false,
           testTimeout: 30_000,
           hookTimeout: 60_000,

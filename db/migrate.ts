@@ -2,19 +2,12 @@
  * Runs the Kysely migrations in migrations/. Used by scripts/migrate.ts (the npm script)
  * and by the integration tests, which migrate a fresh database up and down.
  */
-import { promises as fs } from "node:fs";
-import path from "node:path";
-import { fileURLToPath } from "node:url";
-import { FileMigrationProvider, Migrator, NO_MIGRATIONS, type MigrationResultSet } from "kysely";
+import { Migrator, NO_MIGRATIONS, type MigrationResultSet } from "kysely";
+import { migrations } from "../migrations/index";
 import type { Db } from "./index";
 
-const migrationFolder = fileURLToPath(new URL("../migrations", import.meta.url));
-
 export function createMigrator(db: Db): Migrator {
-  return new Migrator({
-    db,
-    provider: new FileMigrationProvider({ fs, path, migrationFolder }),
-  });
+  return new Migrator({ db, provider: { getMigrations: async () => migrations } });
 }
 
 function unwrap(result: MigrationResultSet): MigrationResultSet {

@@ -6,10 +6,7 @@
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { getDb } from "@/db/index";
-import { findUserByEmailWithHash } from "@/lib/users/queries";
-import { verifyPassword } from "./password";
-import { consumeAttempt, resetAttempts } from "./rate-limit";
-import { signInSchema } from "./schemas";
+import { authorizeCredentials } from "./credentials";
 
 export const SESSION_MAX_AGE_SECONDS = 12 * 60 * 60; // one observing night and a margin
 
@@ -26,18 +23,8 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "E-mail and password",
       credentials: { email: { type: "email" }, password: { type: "password" } },
-      async authorize(credentials, req) {
-        const parsed = signInSchema.safeParse(credentials);
-        if (!parsed.success) throw new Error("Enter your e-mail address and password.");
-        const { email, password } = parsed.data;
-        const key = `${email}|${clientAddress(req?.headers)}`;
-        await consumeAttempt("sign-in", key);
-        const user = await findUserByEmailWithHash(getDb(), email);
-        // Compare even for unknown e-mails so timing does not reveal who is registered.
-        const ok = await verifyPassword(password, user?.passwordHash ?? "$2b$11$invalidinvalidinvalidinvalidinvalidinvalidinvalidinva");
-        if (!user || !ok || user.disabled) throw new Error("That e-mail and password do not match an active account.");
-        await resetAttempts("sign-in", key);
-        return { id: user.id, email: user.email, name: user.name, roles: user.roles };
+      authorize(credentials, req) {
+        return authorizeCredentials(getDb(), credentials, clientAddress(req?.headers));
       },
     }),
   ],

@@ -1,0 +1,64 @@
+/**
+ * Small, self-contained fixtures for integration tests: every call makes its own site,
+ * telescope and program with unique codes, so tests never step on each other's rows.
+ */
+import { randomUUID } from "node:crypto";
+import { getDb } from "@/db/index";
+import type { Role } from "@/db/types";
+import { hashToken } from "@/lib/api-tokens/queries";
+import { hashPassword } from "@/lib/auth/password";
+
+const unique = () => randomUUID().slice(0, 8);
+
+let cachedHash: string | undefined;
+export const FIXTURE_PASSWORD = "correct horse battery";
+
+export async function makeUser(roles: Role[], opts: { disabled?: boolean } = {}) {
+  const db = getDb();
+  cachedHash ??= await hashPassword(FIXTURE_PASSWORD);
+  const email = `u-${unique()}@fixture.test`;
+  const { id } = await db
+    .insertInto("users")
+    .values({ email, name: `Fixture ${email}`, password_hash: cachedHash, disabled_at: opts.disabled ? new Date() : null })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  if (roles.length) await db.insertInto("user_roles").values(roles.map((role) => ({ user_id: id, role }))).execute();
+  return { id, email };
+}
+
+export async function makeToken(userId: string, opts: { revoked?: boolean } = {}) {
+  const token = `nbk_${randomUUID().replace(/-/g, "")}`;
+  await getDb()
+    .insertInto("api_tokens")
+    .values({ user_id: userId, name: "fixture", token_prefix: token.slice(0, 8), token_hash: hashToken(token), revoked_at: opts.revoked ? new Date() : null })
+    .execute();
+  return token;
+}
+
+export async function makeTelescopeAndProgram() {
+  const db = getDb();
+  const code = unique();
+  const pi = await makeUser(["pi"]);
+  const site = await db
+    .insertInto("sites")
+    .values({ code: `S${code}`, name: `Site ${code}`, latitude_deg: -30, longitude_deg: -70, height_m: 2000, time_zone: "America/Santiago" })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  const telescope = await db
+    .insertInto("telescopes")
+    .values({ site_id: site.id, code: `T${code}`, name: `Scope ${code}`, aperture_m: 2, min_altitude_deg: 20, max_airmass: 2.5, sun_avoidance_deg: 40, hour_angle_min_h: -6, hour_angle_max_h: 6 })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  const partner = await db.insertInto("partners").values({ code: `P${code}`, name: `Partner ${code}` }).returning("id").executeTakeFirstOrThrow();
+  const semester = await db
+    .insertInto("semesters")
+    .values({ code: `SEM${code}`, starts_at: new Date("2027-01-01T00:00:00Z"), ends_at: new Date("2027-07-01T00:00:00Z") })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  const program = await db
+    .insertInto("programs")
+    .values({ code: `PRG${code}`, title: "Fixture program", semester_id: semester.id, partner_id: partner.id, pi_user_id: pi.id, rank: 2, allocated_hours: 10, category: "science" })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  return { siteId: site.id, telescopeId: telescope.id, programId: program.id, piId: pi.id };
+}
