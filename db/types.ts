@@ -132,6 +132,19 @@ export interface ApiTokensTable {
   revoked_at: Timestamp | null;
 }
 
+export const FEED_SCOPES = ["telescope", "program", "observer"] as const;
+export type FeedScope = (typeof FEED_SCOPES)[number];
+
+export interface CalendarFeedsTable {
+  id: Generated<string>;
+  owner_user_id: string;
+  scope: FeedScope;
+  scope_id: string;
+  token_hash: string;
+  created_at: CreatedAt;
+  revoked_at: Timestamp | null;
+}
+
 export interface RateLimitsTable {
   key: string;
   points: number;
@@ -153,6 +166,7 @@ export interface Database {
   audit_log: AuditLogTable;
   api_tokens: ApiTokensTable;
   rate_limits: RateLimitsTable;
+  calendar_feeds: CalendarFeedsTable;
 }
 
 export type UserRow = Selectable<UsersTable>;

@@ -4,7 +4,9 @@
  */
 import type { Migration } from "kysely";
 import * as foundation from "./2026-12-01-0001-foundation";
+import * as calendarFeeds from "./2026-12-01-0002-calendar-feeds";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01-0001-foundation": foundation,
+  "2026-12-01-0002-calendar-feeds": calendarFeeds,
 };

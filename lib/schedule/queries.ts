@@ -71,3 +71,11 @@ export async function listBlocksOnTelescopes(db: Db, telescopeIds: string[], fro
     .execute();
   return rows.map(toBlock);
 }
+
+/** Blocks on a telescope overlapping [start, end), optionally ignoring one block (the one being moved). */
+export async function findOverlappingBlocks(db: Db, telescopeId: string, start: Date, end: Date, exceptId?: string): Promise<ScheduledBlock[]> {
+  let q = blocksQuery(db).where("b.telescope_id", "=", telescopeId).where("b.ends_at", ">", start).where("b.starts_at", "<", end);
+  if (exceptId) q = q.where("b.id", "!=", exceptId);
+  const rows = await q.orderBy("b.starts_at").execute();
+  return rows.map(toBlock);
+}

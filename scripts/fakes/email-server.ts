@@ -83,7 +83,7 @@ const IDEMPOTENCY_DIR = ".idempotency";
 
 const DEFAULT_FAULTS: EmailFaults = { failRate: 0, failStatus: 500, failMode: "before-store" };
 
-export function emailFaultsFromEnv(env: NodeJS.ProcessEnv = process.env): Partial<EmailFaults> {
+export function emailFaultsFromEnv(env: Record<string, string | undefined> = process.env): Partial<EmailFaults> {
   const faults: Partial<EmailFaults> = {};
   const rate = envNumber(env, "FAKE_EMAIL_FAIL_RATE");
   if (rate !== undefined) faults.failRate = checkRate(rate);

@@ -109,7 +109,7 @@ export async function listenOnLoopback(
   return { server, port: address.port, close };
 }
 
-export function envNumber(env: NodeJS.ProcessEnv, name: string): number | undefined {
+export function envNumber(env: Record<string, string | undefined>, name: string): number | undefined {
   const raw = env[name];
   if (raw === undefined || raw.trim() === "") return undefined;
   const value = Number(raw);

@@ -91,7 +91,6 @@ export type StoredUpload = {
 };
 
 type Registration = {
-  id: string;
   pending: Set<string>;
   metadata: unknown;
   isDev: boolean;
@@ -99,12 +98,14 @@ type Registration = {
   callbackSlug: string;
   awaitServerData: boolean;
   stream: ServerResponse | null;
+  ttl: NodeJS.Timeout | undefined;
 };
 
 type UploadResult = { url: string; appUrl: string; ufsUrl: string; fileHash: string; serverData: unknown };
 type Outcome<T> = { ok: true; value: T } | { ok: false; status: number; error: string };
 
 const KEY_PATTERN = /^[A-Za-z0-9_-]{1,128}$/;
+const STORAGE_NAME = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 const SIGNATURE_PREFIX = "hmac-sha256=";
 const MULTIPART_SLACK = 64 * 1024;
 const JSON_LIMIT = 1024 * 1024;
@@ -135,7 +136,8 @@ function safeContentType(type: string): string {
 }
 
 function contentDispositionHeader(kind: ContentDisposition, name: string): string {
-  const ascii = name.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
+  // Quotes, control characters and path separators never reach the header as such.
+  const ascii = name.replace(/[^\x20-\x7e]/g, "_").replace(/["\\/]/g, "_");
   return `${kind}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`;
 }
 
@@ -210,7 +212,8 @@ export async function startUploadFake(options: UploadFakeOptions = {}): Promise<
   for (const name of await readdir(recordsDir)) {
     if (!name.endsWith(".json")) continue;
     const parsed = parseJson(await readFile(join(recordsDir, name)));
-    if (parsed.ok && isRecord(parsed.value) && typeof parsed.value.key === "string") {
+    // Only records whose storage name is one of ours, so an edited record cannot point outside the folder.
+    if (parsed.ok && isRecord(parsed.value) && typeof parsed.value.key === "string" && `${String(parsed.value.storageName)}.json` === name && STORAGE_NAME.test(String(parsed.value.storageName))) {
       files.set(parsed.value.key, parsed.value as StoredUpload);
     }
   }
@@ -285,9 +288,13 @@ export async function startUploadFake(options: UploadFakeOptions = {}): Promise<
 
   function finishKey(registration: Registration, key: string): void {
     registration.pending.delete(key);
-    registrations.delete(key);
-    if (registration.pending.size === 0 && registration.stream !== null) {
-      registration.stream.end();
+    if (registrations.get(key) === registration) registrations.delete(key);
+    if (registration.pending.size === 0) {
+      if (registration.ttl !== undefined) {
+        clearTimeout(registration.ttl);
+        timers.delete(registration.ttl);
+      }
+      registration.stream?.end();
       registration.stream = null;
     }
   }
@@ -364,7 +371,6 @@ export async function startUploadFake(options: UploadFakeOptions = {}): Promise<
       return;
     }
     const registration: Registration = {
-      id: randomUUID(),
       pending: new Set(fileKeys),
       metadata: body.metadata ?? {},
       isDev: body.isDev === true,
@@ -372,20 +378,22 @@ export async function startUploadFake(options: UploadFakeOptions = {}): Promise<
       callbackSlug: body.callbackSlug,
       awaitServerData: body.awaitServerData !== false,
       stream: null,
+      ttl: undefined,
     };
+    // Uploads that never arrive must not pin the registration (and a dev stream) forever.
+    const ttl = setTimeout(() => {
+      timers.delete(ttl);
+      for (const key of registration.pending) if (registrations.get(key) === registration) registrations.delete(key);
+      registration.stream?.end();
+      registration.stream = null;
+    }, registrationTtlMs);
+    timers.add(ttl);
+    registration.ttl = ttl;
     if (registration.isDev) {
       res.writeHead(200, { "content-type": "application/x-ndjson", "cache-control": "no-store" });
       res.flushHeaders();
       registration.stream = res;
-      const ttl = setTimeout(() => {
-        timers.delete(ttl);
-        if (registration.stream !== null) registration.stream.end();
-        registration.stream = null;
-      }, registrationTtlMs);
-      timers.add(ttl);
       res.on("close", () => {
-        clearTimeout(ttl);
-        timers.delete(ttl);
         registration.stream = null;
       });
     }
@@ -541,8 +549,11 @@ export async function startUploadFake(options: UploadFakeOptions = {}): Promise<
     const cors = corsHeaders(req);
     if (req.method === "OPTIONS") {
       const requested = req.headers["access-control-request-headers"];
+      // Chromium's private-network preflight, should a page on another address upload here.
+      const privateNetwork = req.headers["access-control-request-private-network"] === "true" ? { "access-control-allow-private-network": "true" } : {};
       res.writeHead(204, {
         ...cors,
+        ...privateNetwork,
         "access-control-allow-methods": "GET, HEAD, PUT, OPTIONS",
         "access-control-allow-headers": typeof requested === "string" ? requested : "content-type, range, x-uploadthing-version, b3, traceparent",
         "access-control-max-age": "600",
@@ -590,8 +601,9 @@ export async function startUploadFake(options: UploadFakeOptions = {}): Promise<
       "content-length": String(info.size),
       "content-disposition": contentDispositionHeader(record.contentDisposition, record.name),
       "x-content-type-options": "nosniff",
-      // Uploaded content is untrusted: never let it run as a page on this origin.
-      "content-security-policy": "sandbox",
+      // Uploaded content is untrusted: never let it run as a page on this origin. PDFs are
+      // exempt because browsers refuse to show a PDF in a sandboxed document.
+      ...(record.type === "application/pdf" ? {} : { "content-security-policy": "sandbox" }),
       "access-control-allow-origin": "*",
       etag: `"${record.fileHash}"`,
       "cache-control": "no-cache",

@@ -112,7 +112,7 @@ function presign(base: string, key: string, data: Record<string, string | number
   return url.href;
 }
 
-function multipart(bytes: Uint8Array, name: string, type: string): FormData {
+function multipart(bytes: Uint8Array<ArrayBuffer>, name: string, type: string): FormData {
   const form = new FormData();
   form.append("file", new File([bytes], name, { type }));
   return form;
@@ -190,7 +190,7 @@ describe("upload fake with UTApi", () => {
 
     const served = await fetch(data.ufsUrl);
     expect(served.headers.get("x-injected")).toBeNull();
-    expect(served.headers.get("content-disposition")).toMatch(/^inline; filename="\.\.\/\.\.\/escape__X-Injected: 1\.txt"/);
+    expect(served.headers.get("content-disposition")).toMatch(/^inline; filename="\.\._\.\._escape___X-Injected: 1\.txt"; filename\*=UTF-8''/);
     expect(served.headers.get("content-security-policy")).toBe("sandbox");
     expect(await served.text()).toBe("plain text");
   });
@@ -216,6 +216,23 @@ describe("upload fake with UTApi", () => {
     await expect(stranger.listFiles()).rejects.toThrow();
     const strangerUpload = await stranger.uploadFiles(new UTFile(["x"], "x.txt"));
     expect(strangerUpload.error?.code).toBe("UPLOAD_FAILED");
+  });
+
+  it("refuses a body that does not match the size in the presigned URL", async () => {
+    const url = presign(fake.url, "sizeKey1", { "x-ut-identifier": LOCAL_UPLOAD_APP_ID, "x-ut-file-name": "a.txt", "x-ut-file-size": 5, "x-ut-file-type": "text/plain" });
+    const put = await fetch(url, { method: "PUT", body: multipart(new Uint8Array([65, 66]), "a.txt", "text/plain") });
+    expect(put.status).toBe(400);
+    expect(((await put.json()) as { error: string }).error).toMatch(/received 2 bytes/);
+  });
+
+  it("still serves stored files after a restart", async () => {
+    const result = await utapi.uploadFiles(new UTFile(["kept"], "kept.txt"));
+    const key = result.data?.key ?? "";
+    await fake.close();
+    fake = await startUploadFake({ port: 0, dir, apiKey: LOCAL_UPLOAD_API_KEY, appId: LOCAL_UPLOAD_APP_ID });
+    utapi = new UTApi({ token, apiUrl: fake.url, ingestUrl: fake.url, logLevel: "Error" });
+    expect(await (await fetch(`${fake.url}/f/${key}`)).text()).toBe("kept");
+    expect((await utapi.listFiles()).files.map((f) => f.key)).toContain(key);
   });
 
   it("answers CORS preflight for browser uploads and exposes x-ut-range-start", async () => {
@@ -248,7 +265,9 @@ describe("upload fake: a PUT that arrives before its registration (dev stream)",
         "x-ut-slug": "ephemeris",
       });
       const put = fetch(url, { method: "PUT", headers: { range: "bytes=0-" }, body: multipart(new TextEncoder().encode("utc,ra,dec\n"), "x.csv", "text/csv") });
-      await new Promise((done) => setTimeout(done, 150));
+      // Wait until the fake holds the stored bytes, so the registration really comes second.
+      for (let i = 0; i < 50 && !(await storedFiles(fake)).some((s) => s.key === key); i += 1) await new Promise((done) => setTimeout(done, 20));
+      expect((await storedFiles(fake)).find((s) => s.key === key)?.callbackDone).toBe(false);
 
       const registration = await fetch(`${fake.url}/route-metadata`, {
         method: "POST",
@@ -305,7 +324,7 @@ describe.each([
 
   beforeAll(async () => {
     fake = await startUploadFake({ port: 0, dir: join(root, isDev ? "dev" : "prod"), apiKey: LOCAL_UPLOAD_API_KEY, appId: LOCAL_UPLOAD_APP_ID, callbackWaitMs: 1_500 });
-    const handler = createRouteHandler({ router, config: { token, ingestUrl: fake.url, apiUrl: fake.url, isDev, logLevel: "Fatal" } });
+    const handler = createRouteHandler({ router, config: { token, ingestUrl: fake.url, isDev, logLevel: "Fatal" } });
     app = await serveHandler(handler);
   });
   afterAll(async () => {
@@ -335,6 +354,6 @@ describe.each([
 
   it("fails the client's upload when onUploadComplete throws", async () => {
     const { uploadFiles } = genUploader<typeof router>({ url: `${app.url}/api/uploadthing`, package: "nightbreak-test", fetch: globalThis.fetch });
-    await expect(uploadFiles("broken", { files: [new File(["x"], "note.txt", { type: "text/plain" })] })).rejects.toThrow();
+    await expect(uploadFiles("broken", { files: [new File(["x"], "note.txt", { type: "text/plain" })] })).rejects.toMatchObject({ code: "UPLOAD_FAILED", message: "XHR failed 502 Bad Gateway" });
   }, 15_000);
 });
