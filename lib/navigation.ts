@@ -10,6 +10,7 @@ export interface NavItem {
 
 export const NAV_ITEMS: NavItem[] = [
   { href: "/", label: "Home", roles: [] },
+  { href: "/schedule", label: "Schedule", roles: [] },
   { href: "/admin", label: "Admin", roles: ["admin"] },
 ];
 
