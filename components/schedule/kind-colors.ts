@@ -19,8 +19,8 @@ export const KIND_LABELS: Record<BlockKind, string> = {
 
 /** Translucent dusk blues: stacked, they darken from sunset to astronomical night. */
 export const TWILIGHT_COLORS = {
-  sunset: "rgba(77, 106, 148, 0.10)",
-  civil: "rgba(48, 70, 111, 0.12)",
-  nautical: "rgba(29, 44, 76, 0.14)",
-  astronomical: "rgba(14, 23, 48, 0.16)",
+  sunset: "rgba(77, 106, 148, 0.14)",
+  civil: "rgba(48, 70, 111, 0.16)",
+  nautical: "rgba(29, 44, 76, 0.18)",
+  astronomical: "rgba(14, 23, 48, 0.22)",
 } as const;

@@ -138,7 +138,7 @@ export function ScheduleCalendar({
             slotMinTime="12:00:00"
             slotMaxTime="36:00:00"
             slotDuration="00:30:00"
-            scrollTime="16:00:00"
+            scrollTime="18:00:00"
             allDaySlot={false}
             nowIndicator
             height={720}
