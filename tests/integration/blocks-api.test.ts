@@ -6,10 +6,10 @@ import { makeTelescopeAndProgram, makeToken, makeUser } from "./fixtures";
 
 const base = "http://localhost/api/v1";
 
-async function call(handler: (r: Request, c: { params: Promise<Record<string, string>> }) => Promise<Response>, token: string, init: { url: string; method?: string; body?: unknown; params?: Record<string, string> }) {
+async function call<P>(handler: (r: Request, c: { params: Promise<P> }) => Promise<Response>, token: string, init: { url: string; method?: string; body?: unknown; params?: P }) {
   const response = await handler(
     new Request(init.url, { method: init.method ?? "GET", headers: { authorization: `Bearer ${token}` }, body: init.body === undefined ? undefined : JSON.stringify(init.body) }),
-    { params: Promise.resolve(init.params ?? {}) },
+    { params: Promise.resolve((init.params ?? {}) as P) },
   );
   return { status: response.status, body: response.status === 204 ? null : ((await response.json()) as Record<string, unknown>) };
 }
