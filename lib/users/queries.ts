@@ -93,3 +93,38 @@ export async function countAdmins(trx: Trx): Promise<number> {
     .executeTakeFirstOrThrow();
   return Number(n);
 }
+
+/** A person offered in a picker (PI, observers, night assistants). */
+export interface PersonOption {
+  id: string;
+  name: string;
+  email: string;
+}
+
+/** Active users holding a role, for the admin pickers. */
+export async function listPeopleWithRole(db: Db, role: Role): Promise<PersonOption[]> {
+  return db
+    .selectFrom("users as u")
+    .innerJoin("user_roles as r", "r.user_id", "u.id")
+    .select(["u.id", "u.name", "u.email"])
+    .where("r.role", "=", role)
+    .where("u.disabled_at", "is", null)
+    .orderBy("u.name")
+    .execute();
+}
+
+/** Of the given users, those who do not hold the role (unknown ids included, named by id). */
+export async function findPeopleWithoutRole(trx: Db | Trx, userIds: readonly string[], role: Role): Promise<PersonOption[]> {
+  if (userIds.length === 0) return [];
+  const rows = await trx
+    .selectFrom("users as u")
+    .select(["u.id", "u.name", "u.email"])
+    .where("u.id", "in", userIds)
+    .where((eb) => eb.exists(eb.selectFrom("user_roles as r").select("r.role").whereRef("r.user_id", "=", "u.id").where("r.role", "=", role)))
+    .execute();
+  const holders = new Set(rows.map((r) => r.id));
+  const missing = userIds.filter((id) => !holders.has(id));
+  if (missing.length === 0) return [];
+  const known = await trx.selectFrom("users").select(["id", "name", "email"]).where("id", "in", missing).execute();
+  return missing.map((id) => known.find((k) => k.id === id) ?? { id, name: `an unknown user (${id.slice(0, 8)})`, email: "" });
+}

@@ -1,0 +1,54 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm } from "react-hook-form";
+import type { ActionResult } from "@/lib/actions/result";
+import { emptyInstrumentForm, instrumentSchema, type InstrumentFormValues } from "@/lib/instruments/schemas";
+import { FormInput, FormSelect, type SelectOption } from "./form-controls";
+import { FormFooter } from "./form-footer";
+import { useSaveAction } from "./use-save-action";
+
+export function InstrumentForm({
+  instrumentId,
+  initial,
+  telescopes,
+  action,
+}: {
+  /** null: create a new instrument. */
+  instrumentId: string | null;
+  initial: InstrumentFormValues;
+  telescopes: SelectOption[];
+  action: (id: string | null, input: unknown) => Promise<ActionResult>;
+}) {
+  const {
+    register,
+    handleSubmit,
+    reset,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<InstrumentFormValues>({ resolver: zodResolver(instrumentSchema, undefined, { raw: true }), defaultValues: initial });
+  const { result, submit } = useSaveAction<InstrumentFormValues>((v) => action(instrumentId, v), setError, (v) => reset(instrumentId ? v : emptyInstrumentForm));
+
+  return (
+    <form
+      onSubmit={handleSubmit(submit)}
+      noValidate
+      aria-label={instrumentId ? "Edit the instrument" : "Create an instrument"}
+      className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-4"
+    >
+      <FormSelect id="instrument-telescope" label="Telescope" options={telescopes} error={errors.telescopeId?.message} {...register("telescopeId")} />
+      <FormInput id="instrument-code" label="Code" error={errors.code?.message} hint="Unique on its telescope." {...register("code")} />
+      <FormInput id="instrument-name" label="Name" error={errors.name?.message} {...register("name")} />
+      <FormInput
+        id="instrument-limiting-magnitude"
+        label="Limiting magnitude"
+        type="number"
+        step="any"
+        error={errors.limitingMagnitude?.message}
+        hint="Faintest it reaches, e.g. 23.5."
+        {...register("limitingMagnitude")}
+      />
+      <FormFooter submitLabel={instrumentId ? "Save instrument" : "Create instrument"} pending={isSubmitting} result={result} />
+    </form>
+  );
+}
