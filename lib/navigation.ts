@@ -11,6 +11,7 @@ export interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { href: "/", label: "Home", roles: [] },
   { href: "/schedule", label: "Schedule", roles: [] },
+  { href: "/feeds", label: "Calendar feeds", roles: [] },
   { href: "/admin", label: "Admin", roles: ["admin"] },
 ];
 

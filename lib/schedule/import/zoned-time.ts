@@ -83,37 +83,45 @@ export function isValidWallClock(w: WallClock): boolean {
 
 export type ZonedResult =
   | { ok: true; instant: Date }
-  | { ok: false; reason: "nonexistent" | "ambiguous" };
+  | { ok: false; reason: "nonexistent" }
+  /** `offsets`: the zone's two offsets that night, in minutes, earlier instant first. */
+  | { ok: false; reason: "ambiguous"; offsets: number[] };
 
 const DAY_MS = 86_400_000;
 
 /**
  * The UTC instant at which the wall clock at `timeZone` reads `w`. Zone offsets are
- * sampled a day either side, which covers every real DST rule (transitions are months apart).
+ * sampled a day either side: equal offsets mean no change near this time (real DST rules
+ * put changes months apart); different ones mean we try both and see which read back.
  */
 export function zonedToUtc(w: WallClock, timeZone: string): ZonedResult {
   const asUtc = wallClockMs(w);
-  const offsets = new Set(
-    [asUtc - DAY_MS, asUtc, asUtc + DAY_MS].map((t) => utcOffsetMinutes(new Date(t), timeZone)),
-  );
-  const matches = new Set<number>();
-  for (const offset of offsets) {
+  const before = utcOffsetMinutes(new Date(asUtc - DAY_MS), timeZone);
+  const after = utcOffsetMinutes(new Date(asUtc + DAY_MS), timeZone);
+  if (before === after) return { ok: true, instant: new Date(asUtc - before * 60_000) };
+  const found: Array<[number, number]> = [];
+  for (const offset of [before, after]) {
     const candidate = asUtc - offset * 60_000;
-    if (wallClockMs(wallClockAt(new Date(candidate), timeZone)) === asUtc) matches.add(candidate);
+    if (wallClockMs(wallClockAt(new Date(candidate), timeZone)) === asUtc) found.push([candidate, offset]);
   }
-  if (matches.size === 0) return { ok: false, reason: "nonexistent" };
-  if (matches.size > 1) return { ok: false, reason: "ambiguous" };
-  const [only] = [...matches];
-  return { ok: true, instant: new Date(only ?? asUtc) };
+  found.sort((a, b) => a[0] - b[0]);
+  const [first] = found;
+  if (!first) return { ok: false, reason: "nonexistent" };
+  if (found.length > 1) return { ok: false, reason: "ambiguous", offsets: found.map(([, offset]) => offset) };
+  return { ok: true, instant: new Date(first[0]) };
 }
 
 const pad = (n: number, width = 2) => String(n).padStart(width, "0");
 
+/** "+02:00", "-03:00", "+05:45". */
+export function formatOffset(minutes: number): string {
+  const abs = Math.abs(minutes);
+  return `${minutes < 0 ? "-" : "+"}${pad(Math.floor(abs / 60))}:${pad(abs % 60)}`;
+}
+
 /** "2027-03-28T03:00:00+02:00": the site's wall clock with its offset, exact and readable. */
 export function formatZonedIso(instant: Date, timeZone: string): string {
   const w = wallClockAt(instant, timeZone);
-  const offset = utcOffsetMinutes(instant, timeZone);
-  const sign = offset < 0 ? "-" : "+";
-  const abs = Math.abs(offset);
-  return `${pad(w.year, 4)}-${pad(w.month)}-${pad(w.day)}T${pad(w.hour)}:${pad(w.minute)}:${pad(w.second)}${sign}${pad(Math.floor(abs / 60))}:${pad(abs % 60)}`;
+  const offset = formatOffset(utcOffsetMinutes(instant, timeZone));
+  return `${pad(w.year, 4)}-${pad(w.month)}-${pad(w.day)}T${pad(w.hour)}:${pad(w.minute)}:${pad(w.second)}${offset}`;
 }
