@@ -5,8 +5,14 @@
 import type { Migration } from "kysely";
 import * as foundation from "./2026-12-01-0001-foundation";
 import * as calendarFeeds from "./2026-12-01-0002-calendar-feeds";
+import * as notifications from "./2026-12-01-0003-notifications";
+import * as requests from "./2026-12-01-0004-requests";
+import * as decisionsLedger from "./2026-12-01-0005-decisions-ledger";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01-0001-foundation": foundation,
   "2026-12-01-0002-calendar-feeds": calendarFeeds,
+  "2026-12-01-0003-notifications": notifications,
+  "2026-12-01-0004-requests": requests,
+  "2026-12-01-0005-decisions-ledger": decisionsLedger,
 };
