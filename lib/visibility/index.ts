@@ -1,0 +1,21 @@
+export {
+  computeVisibility,
+  PLANNING_DISCLAIMER,
+  type VisibilityNight,
+  type VisibilityResult,
+  type VisibilityWindow,
+} from "./compute";
+export { zodErrorToFieldMessages } from "./field-errors";
+export {
+  constraintsSchema,
+  decField,
+  raField,
+  siteSchema,
+  targetSchema,
+  telescopeSchema,
+  visibilityRequestSchema,
+  whenSchema,
+  type VisibilityRequest,
+  type VisibilityRequestInput,
+} from "./schema";
+export { parseVisibilityRequest, type ParsedVisibilityRequest } from "./parse";
