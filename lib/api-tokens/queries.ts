@@ -1,5 +1,5 @@
 import { createHash } from "node:crypto";
-import type { Db } from "@/db/index";
+import type { Db, Trx } from "@/db/index";
 import { findUserById, type User } from "@/lib/users/queries";
 
 export function hashToken(token: string): string {
@@ -18,4 +18,47 @@ export async function findUserByToken(db: Db, token: string): Promise<User | und
   if (!row) return undefined;
   const user = await findUserById(db, row.user_id);
   return user && !user.disabled ? user : undefined;
+}
+
+/** A personal API token as its owner sees it: never the secret, only its visible prefix. */
+export interface ApiToken {
+  id: string;
+  name: string;
+  prefix: string;
+  createdAt: Date;
+  lastUsedAt: Date | null;
+  revokedAt: Date | null;
+}
+
+export async function insertApiToken(trx: Db | Trx, values: { userId: string; name: string; prefix: string; hash: string }): Promise<ApiToken> {
+  const row = await trx
+    .insertInto("api_tokens")
+    .values({ user_id: values.userId, name: values.name, token_prefix: values.prefix, token_hash: values.hash })
+    .returning(["id", "name", "token_prefix", "created_at", "last_used_at", "revoked_at"])
+    .executeTakeFirstOrThrow();
+  return { id: row.id, name: row.name, prefix: row.token_prefix, createdAt: row.created_at, lastUsedAt: row.last_used_at, revokedAt: row.revoked_at };
+}
+
+export async function listApiTokens(db: Db, userId: string): Promise<ApiToken[]> {
+  const rows = await db
+    .selectFrom("api_tokens")
+    .select(["id", "name", "token_prefix", "created_at", "last_used_at", "revoked_at"])
+    .where("user_id", "=", userId)
+    .orderBy("revoked_at", (ob) => ob.desc().nullsFirst())
+    .orderBy("created_at", "desc")
+    .execute();
+  return rows.map((r) => ({ id: r.id, name: r.name, prefix: r.token_prefix, createdAt: r.created_at, lastUsedAt: r.last_used_at, revokedAt: r.revoked_at }));
+}
+
+/** Revokes one of the user's own live tokens; false when there is none with that id. */
+export async function revokeApiToken(trx: Db | Trx, userId: string, id: string): Promise<boolean> {
+  const row = await trx
+    .updateTable("api_tokens")
+    .set({ revoked_at: new Date() })
+    .where("id", "=", id)
+    .where("user_id", "=", userId)
+    .where("revoked_at", "is", null)
+    .returning("id")
+    .executeTakeFirst();
+  return row !== undefined;
 }

@@ -1,0 +1,67 @@
+import { TimeRange } from "@/components/time/time-range";
+import { Instant } from "@/components/time/instant";
+import { formatDuration } from "@/lib/time/format";
+import { DARKNESS_LABELS, URGENCY_LABELS } from "@/lib/requests/labels";
+import type { TooRequest } from "@/lib/requests/types";
+import { formatDec, formatRa } from "@/lib/sky";
+
+function Item({ term, children }: { term: string; children: React.ReactNode }) {
+  return (
+    <div className="flex flex-col gap-0.5">
+      <dt className="text-2xs font-semibold uppercase tracking-wide text-muted">{term}</dt>
+      <dd className="text-sm">{children}</dd>
+    </div>
+  );
+}
+
+const orNone = (n: number | null, unit = "") => (n === null ? "none" : `${n}${unit}`);
+
+/** A filed request, read-only. */
+export function RequestSummary({ request, timeZone }: { request: TooRequest; timeZone: string }) {
+  const t = request.target;
+  const rows = t.ephemeris ?? [];
+  return (
+    <dl className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+      <Item term="Program">{request.programCode ? `${request.programCode} — ${request.programTitle}` : "—"}</Item>
+      <Item term="PI">{request.piName}</Item>
+      <Item term="Target">
+        {t.kind === "fixed" && t.raDeg !== null && t.decDeg !== null ? (
+          <span className="num">
+            {formatRa(t.raDeg)} {formatDec(t.decDeg)} <span className="text-muted">(J2000)</span>
+          </span>
+        ) : (
+          <span className="num">
+            Ephemeris, {rows.length} rows{rows[0] && rows.at(-1) ? ` (${rows[0].time.slice(0, 16)} → ${rows.at(-1)!.time.slice(0, 16)} UT)` : ""}
+            {t.hMag !== null ? `, H = ${t.hMag}${t.gSlope !== null ? `, G = ${t.gSlope}` : ""}` : ""}
+          </span>
+        )}
+      </Item>
+      <Item term="Acceptable telescopes">{request.telescopes.map((s) => `${s.code} — ${s.name}`).join(", ") || "—"}</Item>
+      <Item term="Instrument">{request.instrumentCode ?? "—"}</Item>
+      <Item term="Time needed">{request.durationMinutes === null ? "—" : formatDuration(request.durationMinutes)}</Item>
+      <Item term="Window">
+        {request.earliestStart && request.latestEnd ? <TimeRange start={request.earliestStart} end={request.latestEnd} timeZone={timeZone} /> : "—"}
+      </Item>
+      <Item term="Deadline">{request.deadline ? <Instant at={request.deadline} timeZone={timeZone} /> : "—"}</Item>
+      <Item term="Urgency">{request.urgency ? URGENCY_LABELS[request.urgency] : "—"}</Item>
+      <Item term="Constraints">
+        <span className="num">
+          airmass ≤ {orNone(request.constraints.maxAirmass)} · {DARKNESS_LABELS[request.constraints.darkness]} · Moon ≥{" "}
+          {orNone(request.constraints.minMoonSeparationDeg, "°")} away · Moon lit ≤ {orNone(request.constraints.maxMoonIllumination)}
+        </span>
+      </Item>
+      <Item term="Filed">{request.submittedAt ? <Instant at={request.submittedAt} timeZone={timeZone} /> : "not yet"}</Item>
+      <Item term="Through">{request.source === "api" ? "the API" : "the form"}</Item>
+      <div className="flex flex-col gap-0.5 sm:col-span-2 lg:col-span-3">
+        <dt className="text-2xs font-semibold uppercase tracking-wide text-muted">Scientific justification</dt>
+        <dd className="whitespace-pre-wrap text-sm">{request.justification || "—"}</dd>
+      </div>
+      {request.directorNote && (
+        <div className="flex flex-col gap-0.5 sm:col-span-2 lg:col-span-3">
+          <dt className="text-2xs font-semibold uppercase tracking-wide text-muted">Director&apos;s note</dt>
+          <dd className="whitespace-pre-wrap text-sm">{request.directorNote}</dd>
+        </div>
+      )}
+    </dl>
+  );
+}

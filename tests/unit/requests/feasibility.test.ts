@@ -1,0 +1,110 @@
+// The feasibility check, pure: verdicts per telescope, the refusal reasons, the charts'
+// sky shared by telescopes of one site, and the fading clock. A fixed "now" and targets
+// placed relative to the Sun keep every case independent of the calendar.
+import { describe, expect, it } from "vitest";
+import { CHART_NIGHTS, computeFeasibility } from "@/lib/requests/feasibility/compute";
+import { toSnapshot } from "@/lib/requests/feasibility/snapshot";
+import type { InstrumentRef, TelescopeSky } from "@/lib/requests/feasibility/types";
+import { feasibilityInputSchema, type RequestFormValues } from "@/lib/requests/schemas";
+import { formatDec, formatRa, sunPosition } from "@/lib/sky";
+
+const NOW = new Date("2027-03-10T15:00:00Z");
+const HOUR = 3_600_000;
+const site = { id: "site-s", code: "SS", name: "Southern site", latitudeDeg: -30, longitudeDeg: -70, heightM: 2000, timeZone: "America/Santiago" };
+const scope = (id: string, code: string, sunAvoidanceDeg: number): TelescopeSky => ({
+  id,
+  code,
+  name: `Scope ${code}`,
+  minAltitudeDeg: 20,
+  maxAirmass: 2.9,
+  sunAvoidanceDeg,
+  hourAngleMinH: -6,
+  hourAngleMaxH: 6,
+  site,
+});
+const big = scope("t-big", "BIG", 45);
+const small = scope("t-small", "SML", 30);
+const camera: InstrumentRef = { id: "i-cam", telescopeId: "t-big", code: "CAM", name: "Camera", limitingMagnitude: 21 };
+
+const sun = sunPosition(NOW.getTime());
+const antiSolar = { ra: formatRa((sun.raDeg + 180) % 360), dec: "-30:00:00" };
+
+function input(target: RequestFormValues["target"], overrides: Partial<Record<"latestEnd" | "deadline" | "durationMinutes", string>> = {}) {
+  return feasibilityInputSchema.parse({
+    target,
+    telescopeIds: ["00000000-0000-4000-8000-000000000001"],
+    durationMinutes: overrides.durationMinutes ?? "60",
+    earliestStart: NOW.toISOString(),
+    latestEnd: overrides.latestEnd ?? new Date(NOW.getTime() + 72 * HOUR).toISOString(),
+    deadline: overrides.deadline ?? new Date(NOW.getTime() + 72 * HOUR).toISOString(),
+    constraints: { darkness: "nautical", maxAirmass: "2.5" },
+  });
+}
+
+describe("computeFeasibility", () => {
+  it("finds windows for a target opposite the Sun, inside the horizon, and charts the first nights once per site", () => {
+    const report = computeFeasibility(input({ kind: "fixed", ...antiSolar }), [big, small], null, NOW);
+    expect(report.verdict).toBe("feasible");
+    expect(report.reasons).toEqual([]);
+    expect(report.telescopes.map((t) => t.verdict)).toEqual(["feasible", "feasible"]);
+    expect(report.skies).toHaveLength(1);
+    expect(report.skies[0]?.nights).toHaveLength(CHART_NIGHTS);
+    for (const night of report.skies[0]!.nights) expect(night.points.length).toBeGreaterThan(40);
+    const windows = report.telescopes.flatMap((t) => t.nights.flatMap((n) => n.windows));
+    for (const w of windows) {
+      expect(Date.parse(w.start)).toBeGreaterThanOrEqual(NOW.getTime());
+      expect(Date.parse(w.end)).toBeLessThanOrEqual(NOW.getTime() + 72 * HOUR);
+    }
+    expect(report.telescopes[0]?.airmassLimit).toBeCloseTo(2.5, 2);
+    expect(report.telescopes[0]?.reason).toMatch(/^First window long enough on BIG: \d{4}-\d\d-\d\d \d\d:\d\d–\d\d:\d\d UT \(\d+ min, best airmass 1\.\d\d\)\.$/);
+    expect(report.disclaimer).toMatch(/Planning aid only.*refused, never scheduled/);
+  });
+
+  it("refuses a target inside the sun avoidance limit on every night, naming the telescope", () => {
+    const report = computeFeasibility(input({ kind: "fixed", ra: formatRa(sun.raDeg), dec: formatDec(sun.decDeg) }), [big, small], null, NOW);
+    expect(report.verdict).toBe("refused");
+    expect(report.telescopes.map((t) => t.verdict)).toEqual(["sun_refused", "sun_refused"]);
+    expect(report.reasons).toHaveLength(2);
+    expect(report.reasons[0]).toMatch(/^Refused for sun avoidance on BIG: .*45\.0° limit\. Remove BIG from the acceptable telescopes or change the window\.$/);
+    expect(report.reasons[1]).toMatch(/^Refused for sun avoidance on SML: .*30\.0° limit\./);
+  });
+
+  it("refuses a request whose deadline has passed, or that has no window long enough", () => {
+    const inAnHour = new Date(NOW.getTime() + HOUR).toISOString();
+    const window = input({ kind: "fixed", ...antiSolar }, { latestEnd: inAnHour, deadline: inAnHour, durationMinutes: "30" });
+    const passed = computeFeasibility(window, [big], null, new Date(NOW.getTime() + 2 * HOUR));
+    expect(passed.verdict).toBe("refused");
+    expect(passed.telescopes[0]?.reason).toMatch(/has passed: there is no time left to observe/);
+
+    const neverRises = computeFeasibility(input({ kind: "fixed", ra: "06:00:00", dec: "+80:00:00" }), [big], null, NOW);
+    expect(neverRises.reasons[0]).toBe("No observable window of 60 min before the deadline on any acceptable telescope.");
+    expect(neverRises.telescopes[0]?.verdict).toBe("no_window");
+
+    const tooLong = computeFeasibility(input({ kind: "fixed", ...antiSolar }, { durationMinutes: "700" }), [big], null, NOW);
+    expect(tooLong.telescopes[0]?.reason).toMatch(/^The longest observable window on BIG before the deadline is \d+ min; the request needs 700 min\.$/);
+  });
+
+  it("plans a moving target from its ephemeris and runs the fading clock against the instrument", () => {
+    const rows = Array.from({ length: 97 }, (_, i) => ({
+      time: new Date(NOW.getTime() - 12 * HOUR + i * HOUR).toISOString(),
+      ra: ((sun.raDeg + 180) % 360) + i * 0.05,
+      dec: -30 + i * 0.02,
+      rAu: 1.1 + i * 0.004,
+      deltaAu: 0.2 + i * 0.006,
+    }));
+    const report = computeFeasibility(input({ kind: "ephemeris", ephemeris: rows, hMag: "19", gSlope: "" }), [big], camera, NOW);
+    expect(report.telescopes[0]?.verdict).toBe("feasible");
+    expect(report.fading).toMatchObject({ source: "H-G", limitingMagnitude: 21, instrument: "CAM — Camera" });
+    expect(report.fading?.curve.length).toBeGreaterThan(10);
+    expect(report.fading?.reason).toMatch(/CAM's limit V = 21\.0/);
+  });
+
+  it("keeps verdicts and windows but no chart samples in the snapshot stored at filing", () => {
+    const rows = Array.from({ length: 10 }, (_, i) => ({ time: new Date(NOW.getTime() + i * 6 * HOUR).toISOString(), ra: 120, dec: -30, magnitude: 18 + i * 0.5 }));
+    const snapshot = toSnapshot(computeFeasibility(input({ kind: "ephemeris", ephemeris: rows }), [big], camera, NOW));
+    expect(snapshot).not.toHaveProperty("skies");
+    expect(snapshot.fading).not.toHaveProperty("curve");
+    expect(snapshot.fading?.source).toBe("ephemeris");
+    expect(snapshot.telescopes[0]?.nights.length).toBeGreaterThan(0);
+  });
+});
