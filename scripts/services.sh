@@ -6,12 +6,35 @@ start_services() {
   local port=$1 logs=$2
   export APP_URL="http://127.0.0.1:$port"
   export NEXTAUTH_URL="$APP_URL"
+  trap stop_services EXIT INT TERM
+  start_fakes "$logs"
   (cd "$ROOT" && exec npx next start -p "$port" -H 127.0.0.1) > "$logs/app.log" 2>&1 &
   SERVICE_PIDS+=($!)
-  trap stop_services EXIT INT TERM
   if ! wait_http "$APP_URL/api/health" 90; then
     tail -n 40 "$logs/app.log" >&2
     die "the app did not become healthy at $APP_URL"
+  fi
+}
+
+# start_fakes LOGDIR: the local e-mail and upload fakes on free ports, storing under LOGDIR,
+# and the variables that point the app's SDKs at them. Started with tsx directly (npx
+# would not pass signals on), so stop_services can end them.
+start_fakes() {
+  local logs=$1 email_port upload_port
+  email_port=$(free_port 4010)
+  upload_port=$(free_port $((email_port + 1)))
+  UPLOADTHING_TOKEN=$(cd "$ROOT" && node_modules/.bin/tsx --eval 'import { buildUploadThingToken } from "./lib/uploads/token.ts"; console.log(buildUploadThingToken())')
+  export UPLOADTHING_TOKEN
+  (cd "$ROOT" && FAKE_EMAIL_PORT=$email_port FAKE_EMAIL_DIR="$logs/fake-email" FAKE_UPLOAD_PORT=$upload_port FAKE_UPLOAD_DIR="$logs/fake-uploads" \
+    exec node_modules/.bin/tsx scripts/fakes/start.ts) > "$logs/fakes.log" 2>&1 &
+  SERVICE_PIDS+=($!)
+  export RESEND_BASE_URL="http://127.0.0.1:$email_port"
+  export RESEND_API_KEY="re_local_nightbreak_fake"
+  export UPLOADTHING_INGEST_URL="http://127.0.0.1:$upload_port"
+  export UPLOADTHING_API_URL="http://127.0.0.1:$upload_port"
+  if ! wait_http "$RESEND_BASE_URL/_control" 30 || ! wait_http "$UPLOADTHING_API_URL/_files" 30; then
+    tail -n 20 "$logs/fakes.log" >&2
+    die "the local e-mail and upload fakes did not start"
   fi
 }
 

@@ -4,6 +4,7 @@ import { navFor } from "@/lib/navigation";
 import type { Theme } from "@/lib/theme";
 import type { User } from "@/lib/users/queries";
 import { Logo } from "@/components/ui/logo";
+import { NoticeBell } from "@/components/notices/notice-bell";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";
 import { ThemeToggle } from "./theme-toggle";
@@ -18,6 +19,7 @@ export function AppHeader({ user, theme }: { user: User; theme: Theme }) {
         </Link>
         <NavLinks items={navFor(user.roles)} />
         <div className="ml-auto flex items-center gap-4">
+          <NoticeBell />
           <ThemeToggle initial={theme} />
           <div className="text-right leading-tight">
             <p className="text-sm">{user.name}</p>

@@ -1,0 +1,179 @@
+/**
+ * The five notice events and the facts each one carries. A payload is what the e-mail
+ * and the in-app notice are written from, so it holds names and numbers, not ids to look
+ * up later: the worker renders exactly what was true when the change was committed.
+ * Instants are Dates in code and ISO strings inside a queued job (`z.coerce.date()`
+ * reads them back). Durations are minutes, ledger balances hours.
+ */
+import { z } from "zod";
+import { NOTICE_EVENTS, type NoticeEvent, type Role } from "@/db/types";
+
+export { NOTICE_EVENTS, type NoticeEvent };
+
+const instant = z.coerce.date();
+const text = (max: number) => z.string().trim().min(1).max(max);
+
+export const siteRefSchema = z.object({ code: text(40), name: text(200), timeZone: text(80) });
+export const telescopeRefSchema = z.object({ code: text(40), name: text(200) });
+export const personRefSchema = z.object({ name: text(200), email: z.string().max(320) });
+export const intervalSchema = z.object({ startsAt: instant, endsAt: instant });
+
+export type SiteRef = z.infer<typeof siteRefSchema>;
+export type TelescopeRef = z.infer<typeof telescopeRefSchema>;
+export type PersonRef = z.infer<typeof personRefSchema>;
+export type Interval = z.infer<typeof intervalSchema>;
+
+export const URGENCIES = ["now", "tonight", "within_days"] as const;
+export type Urgency = (typeof URGENCIES)[number];
+
+/** To every active director: a ToO request is waiting in the review queue. */
+export const requestSubmittedSchema = z.object({
+  requestId: z.uuid(),
+  targetName: text(200),
+  programCode: text(40),
+  programTitle: text(300),
+  piName: text(200),
+  urgency: z.enum(URGENCIES),
+  /** Only for `within_days`: the request lapses after this instant. */
+  deadline: instant.nullable(),
+  submittedAt: instant,
+  requestedMinutes: z.number().int().positive(),
+  telescopes: z.array(telescopeRefSchema).min(1),
+  /** The site whose local time the e-mail shows beside UT (the first acceptable telescope's). */
+  site: siteRefSchema,
+  /** The first observable window found by the feasibility check, when there is one. */
+  firstWindow: intervalSchema.nullable(),
+  justification: z.string().max(600),
+});
+
+/** To the PI: the director approved or declined the request, and why. */
+export const decisionMadeSchema = z.object({
+  requestId: z.uuid(),
+  piUserId: z.uuid(),
+  targetName: text(200),
+  programCode: text(40),
+  decision: z.enum(["approved", "declined"]),
+  reason: text(2000),
+  decidedBy: personRefSchema,
+  decidedAt: instant,
+  /** The granted slot's site, or the first acceptable telescope's when declined: local times are shown there. */
+  site: siteRefSchema,
+  /** The slot granted on approval; null when declined. */
+  slot: z.object({ telescope: telescopeRefSchema, startsAt: instant, endsAt: instant }).nullable(),
+  /** Scheduled minutes the override displaces (0 when it used free or engineering time). */
+  displacedMinutes: z.number().int().nonnegative(),
+});
+
+/** To each displaced observer: what they lose, by how much, what they are owed, who to ask. */
+export const blockDisplacedSchema = z.object({
+  displacementId: z.uuid(),
+  observerUserId: z.uuid(),
+  requestId: z.uuid(),
+  targetName: text(200),
+  programCode: text(40),
+  programTitle: text(300),
+  telescope: telescopeRefSchema,
+  site: siteRefSchema,
+  /** The block as it was scheduled. */
+  block: intervalSchema,
+  /** The parts of it given to the override. */
+  lost: z.array(intervalSchema).min(1),
+  lostMinutes: z.number().int().positive(),
+  /** What is left of the block (empty when the whole block went). */
+  remaining: z.array(intervalSchema),
+  /** Hours credited to the program on the time-owed ledger for this displacement. */
+  owedHours: z.number().nonnegative(),
+  contact: personRefSchema,
+});
+
+export const TONIGHT_CHANGE_KINDS = ["added", "shortened", "split", "removed"] as const;
+export type TonightChangeKind = (typeof TONIGHT_CHANGE_KINDS)[number];
+
+/** To the night assistants of one telescope: tonight's queue changed. */
+export const tonightChangedSchema = z.object({
+  changeId: z.uuid(),
+  telescopeId: z.uuid(),
+  telescope: telescopeRefSchema,
+  site: siteRefSchema,
+  /** The local date on which the night begins (YYYY-MM-DD). */
+  nightOf: z.string().regex(/^\d{4}-\d{2}-\d{2}$/),
+  targetName: z.string().max(200).nullable(),
+  changes: z
+    .array(
+      z.object({
+        kind: z.enum(TONIGHT_CHANGE_KINDS),
+        programCode: text(40),
+        /** A short description: the target of a ToO block, the observer of a science block. */
+        label: z.string().max(200),
+        startsAt: instant,
+        endsAt: instant,
+      }),
+    )
+    .min(1),
+});
+
+/** To the observer: a payback block repays time the program was owed. */
+export const paybackScheduledSchema = z.object({
+  paybackBlockId: z.uuid(),
+  observerUserId: z.uuid(),
+  programCode: text(40),
+  programTitle: text(300),
+  telescope: telescopeRefSchema,
+  site: siteRefSchema,
+  startsAt: instant,
+  endsAt: instant,
+  minutes: z.number().int().positive(),
+  owedBeforeHours: z.number().nonnegative(),
+  owedAfterHours: z.number().nonnegative(),
+  contact: personRefSchema,
+});
+
+export const NOTICE_PAYLOAD_SCHEMAS = {
+  request_submitted: requestSubmittedSchema,
+  decision_made: decisionMadeSchema,
+  block_displaced: blockDisplacedSchema,
+  tonight_changed: tonightChangedSchema,
+  payback_scheduled: paybackScheduledSchema,
+} as const satisfies Record<NoticeEvent, z.ZodType>;
+
+export type RequestSubmittedPayload = z.infer<typeof requestSubmittedSchema>;
+export type DecisionMadePayload = z.infer<typeof decisionMadeSchema>;
+export type BlockDisplacedPayload = z.infer<typeof blockDisplacedSchema>;
+export type TonightChangedPayload = z.infer<typeof tonightChangedSchema>;
+export type PaybackScheduledPayload = z.infer<typeof paybackScheduledSchema>;
+
+export interface NoticePayloads {
+  request_submitted: RequestSubmittedPayload;
+  decision_made: DecisionMadePayload;
+  block_displaced: BlockDisplacedPayload;
+  tonight_changed: TonightChangedPayload;
+  payback_scheduled: PaybackScheduledPayload;
+}
+
+/** One event with its payload, discriminated by `event`. */
+export type NoticeOf<E extends NoticeEvent = NoticeEvent> = { [K in E]: { event: K; payload: NoticePayloads[K] } }[E];
+
+/** What each event is called on the preferences form, and which roles receive it. */
+export const NOTICE_EVENT_LABELS: Record<NoticeEvent, { label: string; roles: readonly Role[] }> = {
+  request_submitted: { label: "A ToO request is submitted", roles: ["director"] },
+  decision_made: { label: "A decision on my ToO request", roles: ["pi"] },
+  block_displaced: { label: "My block is displaced by an override", roles: ["observer"] },
+  tonight_changed: { label: "Tonight's queue changes on my telescope", roles: ["night_assistant"] },
+  payback_scheduled: { label: "A payback block is scheduled for me", roles: ["observer"] },
+};
+
+/** Parses a payload (from a queued job, say) back into its typed form with Dates. */
+export function parseNotice(event: NoticeEvent, payload: unknown): NoticeOf {
+  switch (event) {
+    case "request_submitted":
+      return { event, payload: requestSubmittedSchema.parse(payload) };
+    case "decision_made":
+      return { event, payload: decisionMadeSchema.parse(payload) };
+    case "block_displaced":
+      return { event, payload: blockDisplacedSchema.parse(payload) };
+    case "tonight_changed":
+      return { event, payload: tonightChangedSchema.parse(payload) };
+    case "payback_scheduled":
+      return { event, payload: paybackScheduledSchema.parse(payload) };
+  }
+}

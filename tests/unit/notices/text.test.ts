@@ -1,0 +1,65 @@
+// The pure pieces: in-app text, links, idempotency keys, delivery policy, outbox URL check.
+import { describe, expect, it } from "vitest";
+import { DEFAULT_POLICY, policyFromEnv } from "@/lib/notices/config";
+import { describeNotice } from "@/lib/notices/describe";
+import { noticeKey } from "@/lib/notices/enqueue";
+import { appBaseUrl, noticeLink } from "@/lib/notices/links";
+import { localFakeUrl } from "@/lib/notices/outbox";
+import { blockDisplaced, decisionMade, paybackScheduled, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
+
+describe("in-app notice text", () => {
+  it("names the facts in UT and local time and links to the page that answers it", () => {
+    const p = requestSubmitted();
+    expect(describeNotice({ event: "request_submitted", payload: p })).toEqual({
+      title: `ToO request for ${TARGET} (CON-TOO-02), urgency tonight`,
+      body: "Ilona Marsh asks for 1 h 30 min on AQ41, AQ16, submitted 2026-12-01 21:47 UT (2026-12-01 18:47 GMT-3).",
+      link: `/review/${p.requestId}`,
+    });
+    const d = describeNotice({ event: "block_displaced", payload: blockDisplaced() });
+    expect(d.body).toContain("1 h 30 min go to a ToO override");
+    expect(d.body).toContain("AUR-114 is owed 1.5 h");
+    expect(d.link).toBe("/ledger");
+  });
+
+  it("links every event to its page", () => {
+    const decision = decisionMade();
+    expect(noticeLink({ event: "decision_made", payload: decision })).toBe(`/requests/${decision.requestId}`);
+    expect(noticeLink({ event: "tonight_changed", payload: tonightChanged() })).toBe("/tonight/AQ41");
+    expect(noticeLink({ event: "payback_scheduled", payload: paybackScheduled() })).toBe("/ledger");
+  });
+
+  it("keeps a title within 300 characters however long the target name", () => {
+    const { title } = describeNotice({ event: "request_submitted", payload: requestSubmitted({ targetName: "x".repeat(200), programTitle: "y" }) });
+    expect(title.length).toBeLessThanOrEqual(300);
+  });
+});
+
+describe("keys, links and settings", () => {
+  it("builds a deterministic idempotency key per event, subject and recipient", () => {
+    expect(noticeKey("block_displaced", "d1", "u1")).toBe("block_displaced:d1:u1");
+  });
+
+  it("takes the app's address from APP_URL, then NEXTAUTH_URL", () => {
+    expect(appBaseUrl({ APP_URL: "http://127.0.0.1:3100/" })).toBe("http://127.0.0.1:3100");
+    expect(appBaseUrl({ NEXTAUTH_URL: "https://desk.example.test" })).toBe("https://desk.example.test");
+    expect(appBaseUrl({})).toBe("http://localhost:3000");
+  });
+
+  it("reads the delivery policy from the environment", () => {
+    expect(policyFromEnv({})).toEqual(DEFAULT_POLICY);
+    expect(policyFromEnv({ NOTICE_RETRY_BACKOFF: "off", NOTICE_RETRY_DELAY_SECONDS: "0", NOTICE_POLL_SECONDS: "0.5" })).toMatchObject({
+      retryBackoff: false,
+      retryDelaySeconds: 0,
+      pollingIntervalSeconds: 0.5,
+    });
+    expect(() => policyFromEnv({ NOTICE_POLL_SECONDS: "0.1" })).toThrow(/NOTICE_POLL_SECONDS/);
+  });
+
+  it("shows the outbox only for a mail service on this machine", () => {
+    expect(localFakeUrl({ RESEND_BASE_URL: "http://127.0.0.1:4010" })).toBe("http://127.0.0.1:4010");
+    expect(localFakeUrl({ RESEND_BASE_URL: "http://localhost:4010/" })).toBe("http://localhost:4010");
+    expect(localFakeUrl({ RESEND_BASE_URL: "https://api.resend.com" })).toBeNull();
+    expect(localFakeUrl({ RESEND_BASE_URL: "http://127.0.0.1.example.test" })).toBeNull();
+    expect(localFakeUrl({})).toBeNull();
+  });
+});
