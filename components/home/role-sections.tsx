@@ -1,9 +1,13 @@
 import Link from "next/link";
 import { getDb } from "@/db/index";
+import { UrgencyBadge } from "@/components/review/urgency-badge";
 import { EmptyState } from "@/components/ui/empty-state";
+import { listOwedToObserver, type ObserverOwed } from "@/lib/ledger/owed";
 import { countConsortium, listProgramsForPi } from "@/lib/programs/queries";
 import { listBlocksForObserver, listBlocksOnTelescopes } from "@/lib/schedule/queries";
+import { listReviewQueue } from "@/lib/review/queue";
 import { listTelescopesForAssistant } from "@/lib/telescopes/queries";
+import { formatDuration, formatUt } from "@/lib/time/format";
 import { BlockList } from "./block-list";
 import { HomeSection } from "./section";
 
@@ -32,10 +36,30 @@ export async function PiSection({ userId }: { userId: string }) {
   );
 }
 
-export function DirectorSection() {
+export async function DirectorSection() {
+  const queue = await listReviewQueue(getDb(), new Date());
   return (
     <HomeSection id="home-director" title="Requests waiting for a decision">
-      <EmptyState>No override requests are waiting for review.</EmptyState>
+      {queue.length ? (
+        <>
+          <p className="mb-2">
+            <span className="num font-semibold">{queue.length}</span> override request{queue.length === 1 ? "" : "s"} waiting, most urgent first.
+          </p>
+          <ul className="divide-y divide-line">
+            {queue.slice(0, 3).map((r) => (
+              <li key={r.id} className="flex flex-wrap items-baseline gap-3 py-1.5">
+                <UrgencyBadge urgency={r.urgency} />
+                <Link href={`/review/${r.id}`} className="font-medium underline">{r.targetName}</Link>
+                <span className="num text-muted">{r.programCode ?? "—"}</span>
+                <span className="text-xs text-muted">{r.summary}</span>
+              </li>
+            ))}
+          </ul>
+          <p className="mt-3"><Link href="/review" className="underline">Open the review queue</Link></p>
+        </>
+      ) : (
+        <EmptyState>No override requests are waiting for review.</EmptyState>
+      )}
     </HomeSection>
   );
 }
@@ -46,7 +70,30 @@ export async function ObserverSection({ userId }: { userId: string }) {
   return (
     <HomeSection id="home-observer" title="Your blocks in the next two weeks">
       <BlockList blocks={blocks} empty="You are not scheduled on any telescope in the next two weeks." />
+      <OwedLines owed={await listOwedToObserver(getDb(), userId, now)} />
     </HomeSection>
+  );
+}
+
+function OwedLines({ owed }: { owed: ObserverOwed[] }) {
+  if (!owed.length) return null;
+  return (
+    <div className="mt-3 border-t border-line pt-3">
+      <h3 className="mb-1 text-xs font-semibold uppercase tracking-wide text-muted">Time owed to your programs</h3>
+      <ul className="divide-y divide-line">
+        {owed.map((o) => (
+          <li key={o.programId} className="flex flex-wrap items-baseline gap-3 py-1.5">
+            <span className="num w-28 shrink-0">{o.programCode}</span>
+            <span className="flex-1">
+              {o.owedMinutes > 0 ? <>owed <strong className="num">{formatDuration(o.owedMinutes)}</strong></> : "repaid in full"}
+              {o.yourDisplacedMinutes > 0 && <span className="text-muted"> · {formatDuration(o.yourDisplacedMinutes)} taken from your blocks</span>}
+            </span>
+            {o.nextPayback && <span className="num text-xs text-muted">payback on {o.nextPayback.telescopeCode} from {formatUt(o.nextPayback.startsAt)} UT</span>}
+          </li>
+        ))}
+      </ul>
+      <p className="mt-2"><Link href="/ledger" className="underline">See the ledger</Link></p>
+    </div>
   );
 }
 

@@ -8,7 +8,7 @@ import { OpenApiGeneratorV31, OpenAPIRegistry } from "@asteasolutions/zod-to-ope
 import { registerSecurity } from "./common";
 import { registerAdminUserPaths } from "./paths/admin-users";
 import { registerNoticePaths } from "./paths/notices";
-import { registerReviewPaths } from "./paths/review";
+import { registerDecisionLedgerPaths } from "./paths/decisions-ledger";
 import { registerSchedulePaths } from "./paths/schedule";
 import { registerTonightPaths } from "./paths/tonight";
 import { registerTooRequestPaths } from "./paths/too-requests";
@@ -21,7 +21,7 @@ const PATH_GROUPS: ((registry: OpenAPIRegistry) => void)[] = [
   registerAdminUserPaths,
   registerNoticePaths,
   registerTonightPaths,
-  registerReviewPaths,
+  registerDecisionLedgerPaths,
 ];
 
 type Document = ReturnType<OpenApiGeneratorV31["generateDocument"]>;

@@ -1,0 +1,3 @@
+export default function Loading() {
+  return <p className="text-muted" aria-live="polite">Computing feasibility and slots for this request…</p>;
+}
