@@ -8,14 +8,14 @@ export function hashToken(token: string): string {
 
 /** The user behind a bearer token, or undefined when the token is unknown, revoked or its user disabled. */
 export async function findUserByToken(db: Db, token: string): Promise<User | undefined> {
-  const row = await db
-    .updateTable("api_tokens")
-    .set({ last_used_at: new Date() })
-    .where("token_hash", "=", hashToken(token))
-    .where("revoked_at", "is", null)
-    .returning("user_id")
-    .executeTakeFirst();
+  const hash = hashToken(token);
+  const row = await db.selectFrom("api_tokens").select(["user_id", "last_used_at"]).where("token_hash", "=", hash).where("revoked_at", "is", null).executeTakeFirst();
   if (!row) return undefined;
+  // Record use at most once a minute: a write (and its row lock) on every request would
+  // serialise a busy pipeline's calls on one token.
+  if (!row.last_used_at || Date.now() - row.last_used_at.getTime() > 60_000) {
+    await db.updateTable("api_tokens").set({ last_used_at: new Date() }).where("token_hash", "=", hash).execute();
+  }
   const user = await findUserById(db, row.user_id);
   return user && !user.disabled ? user : undefined;
 }

@@ -10,7 +10,7 @@ import { registerAdminUserPaths } from "./paths/admin-users";
 import { registerNoticePaths } from "./paths/notices";
 import { registerDecisionLedgerPaths } from "./paths/decisions-ledger";
 import { registerSchedulePaths } from "./paths/schedule";
-import { registerTonightPaths } from "./paths/tonight";
+import { registerTonightPaths } from "@/lib/tonight/openapi";
 import { registerTooRequestPaths } from "./paths/too-requests";
 import { registerVisibilityPaths } from "./paths/visibility";
 
