@@ -129,6 +129,8 @@ export function ScheduleCalendar({
           <FullCalendar
             plugins={[timeGridPlugin, interactionPlugin, luxonPlugin]}
             initialView="nightWeek"
+            // Columns run noon to noon: after midnight the night in progress began yesterday.
+            initialDate={new Date(Date.now() - 12 * 3_600_000)}
             views={{
               nightWeek: { type: "timeGrid", duration: { days: 7 }, buttonText: "Week" },
               oneNight: { type: "timeGrid", duration: { days: 1 }, buttonText: "Night" },
