@@ -28,6 +28,8 @@ export async function runLoad(options: {
   method?: "GET" | "POST";
   headers?: Record<string, string>;
   body?: string;
+  /** Per-request changes (autocannon's `setupRequest`), e.g. a fresh Idempotency-Key each time. */
+  requests?: autocannon.Request[];
 }): Promise<LoadResult> {
   const times: number[] = [];
   let instance!: autocannon.Instance;
@@ -35,11 +37,11 @@ export async function runLoad(options: {
     instance = autocannon({
     url: options.url,
     connections: options.connections,
-    amount: options.amount,
-    duration: options.amount ? undefined : (options.duration ?? 10),
+    ...(options.amount ? { amount: options.amount } : { duration: options.duration ?? 10 }),
     method: options.method ?? "GET",
     headers: options.headers,
     body: options.body,
+    requests: options.requests,
     timeout: 10,
     }, (error: unknown, result: autocannon.Result) => (error ? reject(error instanceof Error ? error : new Error(String(error))) : resolve(result)));
   });
