@@ -8,6 +8,7 @@ import * as calendarFeeds from "./2026-12-01-0002-calendar-feeds";
 import * as notifications from "./2026-12-01-0003-notifications";
 import * as requests from "./2026-12-01-0004-requests";
 import * as decisionsLedger from "./2026-12-01-0005-decisions-ledger";
+import * as outcomeNotice from "./2026-12-01-0006-outcome-notice";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01-0001-foundation": foundation,
@@ -15,4 +16,5 @@ export const migrations: Record<string, Migration> = {
   "2026-12-01-0003-notifications": notifications,
   "2026-12-01-0004-requests": requests,
   "2026-12-01-0005-decisions-ledger": decisionsLedger,
+  "2026-12-01-0006-outcome-notice": outcomeNotice,
 };

@@ -3,7 +3,7 @@
  * plain-text body. Pure, so the enqueue path can write it inside the caller's transaction.
  */
 import type { NoticeOf } from "./events";
-import { formatDuration, formatHours, rangeUtAndLocal, URGENCY_LABELS, utAndLocal } from "./format";
+import { formatDuration, formatHours, OUTCOME_WORDS, outcomeSentence, rangeUtAndLocal, URGENCY_LABELS, utAndLocal } from "./format";
 import { noticeLink } from "./links";
 
 export interface NoticeText {
@@ -69,6 +69,14 @@ function describe(notice: NoticeOf): Omit<NoticeText, "link"> {
         body:
           `${rangeUtAndLocal(p.startsAt, p.endsAt, p.site.timeZone)}. ` +
           `Owed before: ${formatHours(p.owedBeforeHours)}; still owed after it: ${formatHours(p.owedAfterHours)}.`,
+      };
+    }
+    case "outcome_logged": {
+      const p = notice.payload;
+      const note = p.note.trim() ? ` ${p.loggedBy.name}: ${p.note.trim()}` : ` Logged by ${p.loggedBy.name}.`;
+      return {
+        title: `Your ToO override for ${p.targetName} on ${p.telescope.code}: ${OUTCOME_WORDS[p.outcome]}`,
+        body: `${outcomeSentence(p)} Block ${rangeUtAndLocal(p.block.startsAt, p.block.endsAt, p.site.timeZone)}.${note}`,
       };
     }
   }

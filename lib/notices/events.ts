@@ -1,12 +1,12 @@
 /**
- * The five notice events and the facts each one carries. A payload is what the e-mail
+ * The six notice events and the facts each one carries. A payload is what the e-mail
  * and the in-app notice are written from, so it holds names and numbers, not ids to look
  * up later: the worker renders exactly what was true when the change was committed.
  * Instants are Dates in code and ISO strings inside a queued job (`z.coerce.date()`
  * reads them back). Durations are minutes, ledger balances hours.
  */
 import { z } from "zod";
-import { NOTICE_EVENTS, type NoticeEvent, type Role } from "@/db/types";
+import { EXECUTION_OUTCOMES, NOTICE_EVENTS, type NoticeEvent, type Role } from "@/db/types";
 
 export { NOTICE_EVENTS, type NoticeEvent };
 
@@ -128,12 +128,39 @@ export const paybackScheduledSchema = z.object({
   contact: personRefSchema,
 });
 
+/** What a logged outcome can make of a ToO request. */
+export const SETTLED_REQUEST_STATES = ["executed", "partially_executed", "not_executed"] as const;
+export type SettledRequestState = (typeof SETTLED_REQUEST_STATES)[number];
+
+/** To the PI: the night assistant logged what happened to their ToO block, which settled the request. */
+export const outcomeLoggedSchema = z.object({
+  /** The night-log entry; a later log of the same block (a correction) is a new notice. */
+  executionId: z.uuid(),
+  requestId: z.uuid(),
+  piUserId: z.uuid(),
+  targetName: text(200),
+  programCode: text(40),
+  telescope: telescopeRefSchema,
+  site: siteRefSchema,
+  /** The ToO block as it was scheduled. */
+  block: intervalSchema,
+  outcome: z.enum(EXECUTION_OUTCOMES),
+  /** Minutes actually observed, when the night assistant said. */
+  minutesUsed: z.number().int().nonnegative().nullable(),
+  /** The night assistant's note (may be empty). */
+  note: z.string().max(4000),
+  requestState: z.enum(SETTLED_REQUEST_STATES),
+  loggedBy: personRefSchema,
+  loggedAt: instant,
+});
+
 export const NOTICE_PAYLOAD_SCHEMAS = {
   request_submitted: requestSubmittedSchema,
   decision_made: decisionMadeSchema,
   block_displaced: blockDisplacedSchema,
   tonight_changed: tonightChangedSchema,
   payback_scheduled: paybackScheduledSchema,
+  outcome_logged: outcomeLoggedSchema,
 } as const satisfies Record<NoticeEvent, z.ZodType>;
 
 export type RequestSubmittedPayload = z.infer<typeof requestSubmittedSchema>;
@@ -141,6 +168,7 @@ export type DecisionMadePayload = z.infer<typeof decisionMadeSchema>;
 export type BlockDisplacedPayload = z.infer<typeof blockDisplacedSchema>;
 export type TonightChangedPayload = z.infer<typeof tonightChangedSchema>;
 export type PaybackScheduledPayload = z.infer<typeof paybackScheduledSchema>;
+export type OutcomeLoggedPayload = z.infer<typeof outcomeLoggedSchema>;
 
 export interface NoticePayloads {
   request_submitted: RequestSubmittedPayload;
@@ -148,6 +176,7 @@ export interface NoticePayloads {
   block_displaced: BlockDisplacedPayload;
   tonight_changed: TonightChangedPayload;
   payback_scheduled: PaybackScheduledPayload;
+  outcome_logged: OutcomeLoggedPayload;
 }
 
 /** One event with its payload, discriminated by `event`. */
@@ -160,6 +189,7 @@ export const NOTICE_EVENT_LABELS: Record<NoticeEvent, { label: string; roles: re
   block_displaced: { label: "My block is displaced by an override", roles: ["observer"] },
   tonight_changed: { label: "Tonight's queue changes on my telescope", roles: ["night_assistant"] },
   payback_scheduled: { label: "A payback block is scheduled for me", roles: ["observer"] },
+  outcome_logged: { label: "The night log records what happened to my ToO", roles: ["pi"] },
 };
 
 /** Parses a payload (from a queued job, say) back into its typed form with Dates. */
@@ -175,5 +205,7 @@ export function parseNotice(event: NoticeEvent, payload: unknown): NoticeOf {
       return { event, payload: tonightChangedSchema.parse(payload) };
     case "payback_scheduled":
       return { event, payload: paybackScheduledSchema.parse(payload) };
+    case "outcome_logged":
+      return { event, payload: outcomeLoggedSchema.parse(payload) };
   }
 }

@@ -3,6 +3,7 @@
  * site's local time beside it, durations in hours and minutes, ledger hours to 0.1 h.
  */
 import { formatDuration, formatLocal, formatUt } from "@/lib/time/format";
+import type { OutcomeLoggedPayload } from "./events";
 
 export function utAndLocal(at: Date, timeZone: string): string {
   return `${formatUt(at)} UT (${formatLocal(at, timeZone)})`;
@@ -30,3 +31,40 @@ export function formatHours(hours: number): string {
 }
 
 export const URGENCY_LABELS = { now: "now (interrupt the current block)", tonight: "tonight", within_days: "within days" } as const;
+
+/** A logged outcome in the words of a notice. */
+export const OUTCOME_WORDS: Record<OutcomeLoggedPayload["outcome"], string> = {
+  executed: "executed",
+  partial: "partially executed",
+  aborted: "aborted",
+  weather: "lost to weather",
+  technical: "lost to a technical fault",
+};
+
+export const SETTLED_STATE_WORDS: Record<OutcomeLoggedPayload["requestState"], string> = {
+  executed: "executed",
+  partially_executed: "partially executed",
+  not_executed: "not executed",
+};
+
+/** "Your override for X on AQ41 was lost to weather; nothing was observed." */
+export function outcomeSentence(p: OutcomeLoggedPayload): string {
+  const what = `Your override for ${p.targetName} on ${p.telescope.code}`;
+  const used = p.minutesUsed;
+  switch (p.outcome) {
+    case "executed":
+      return used ? `${what} was observed: ${formatDuration(used)} on sky.` : `${what} was observed.`;
+    case "partial": {
+      const blockMinutes = minutesBetween(p.block.startsAt, p.block.endsAt);
+      return used
+        ? `${what} was partly observed: ${formatDuration(used)} of the ${formatDuration(blockMinutes)} block.`
+        : `${what} was partly observed.`;
+    }
+    case "aborted":
+    case "weather":
+    case "technical":
+      return used
+        ? `${what} was ${OUTCOME_WORDS[p.outcome]} after ${formatDuration(used)} on sky; the request is recorded as not executed.`
+        : `${what} was ${OUTCOME_WORDS[p.outcome]}; nothing was observed.`;
+  }
+}

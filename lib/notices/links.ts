@@ -19,6 +19,7 @@ export function noticeLink(notice: NoticeOf): string {
     case "request_submitted":
       return `/review/${notice.payload.requestId}`;
     case "decision_made":
+    case "outcome_logged":
       return `/requests/${notice.payload.requestId}`;
     case "block_displaced":
     case "payback_scheduled":

@@ -13,6 +13,7 @@ import { enqueueNotice, type EnqueueResult } from "./enqueue";
 import type {
   BlockDisplacedPayload,
   DecisionMadePayload,
+  OutcomeLoggedPayload,
   PaybackScheduledPayload,
   RequestSubmittedPayload,
   TonightChangedPayload,
@@ -44,4 +45,9 @@ export async function noticeTonightChanged(trx: Trx, payload: TonightChangedPayl
 /** To the payback block's observer (`payload.observerUserId`). */
 export async function noticePaybackScheduled(trx: Trx, payload: PaybackScheduledPayload): Promise<EnqueueResult> {
   return enqueueNotice(trx, { event: "payback_scheduled", payload, subjectId: payload.paybackBlockId, recipientIds: [payload.observerUserId] });
+}
+
+/** To the request's PI (`payload.piUserId`); one notice per night-log entry (`executionId`). */
+export async function noticeOutcomeLogged(trx: Trx, payload: OutcomeLoggedPayload): Promise<EnqueueResult> {
+  return enqueueNotice(trx, { event: "outcome_logged", payload, subjectId: payload.executionId, recipientIds: [payload.piUserId] });
 }

@@ -7,6 +7,7 @@
 import { render, toPlainText } from "@react-email/components";
 import { BlockDisplacedEmail } from "@/emails/block-displaced";
 import { DecisionMadeEmail } from "@/emails/decision-made";
+import { OutcomeLoggedEmail } from "@/emails/outcome-logged";
 import { PaybackScheduledEmail } from "@/emails/payback-scheduled";
 import { RequestSubmittedEmail } from "@/emails/request-submitted";
 import { TonightChangedEmail } from "@/emails/tonight-changed";
@@ -44,17 +45,21 @@ function element(notice: NoticeOf, ctx: RenderContext): React.ReactElement {
       return <TonightChangedEmail payload={notice.payload} {...ctx} />;
     case "payback_scheduled":
       return <PaybackScheduledEmail payload={notice.payload} {...ctx} />;
+    case "outcome_logged":
+      return <OutcomeLoggedEmail payload={notice.payload} {...ctx} />;
   }
 }
 
-/** Whom a reply reaches: the director named in the notice, when there is one. */
+/** Whom a reply reaches: the director named in the notice, or the night assistant who logged an outcome. */
 export function replyToFor(notice: NoticeOf): string | null {
   const email =
     notice.event === "decision_made"
       ? notice.payload.decidedBy.email
       : notice.event === "block_displaced" || notice.event === "payback_scheduled"
         ? notice.payload.contact.email
-        : "";
+        : notice.event === "outcome_logged"
+          ? notice.payload.loggedBy.email
+          : "";
   return email.includes("@") ? email : null;
 }
 

@@ -1,17 +1,19 @@
 /**
  * The night log: what happened to a block. For a ToO block the logged outcome settles the
  * request (executed, partially executed or not executed) in the same transaction, with a
- * request event and audit rows. A later log of the same block corrects the earlier one.
+ * request event, audit rows and a notice to the PI. A later log of the same block corrects
+ * the earlier one (and tells the PI again).
  */
 import type { Db, Trx } from "@/db/index";
 import type { RequestState } from "@/db/types";
 import { writeAudit } from "@/lib/audit/queries";
+import { noticeOutcomeLogged } from "@/lib/notices/notify";
 import { insertRequestEvent, lockRequest, setRequestState } from "@/lib/requests/queries";
 import { formatUt } from "@/lib/time/format";
 import { canOperate } from "./access";
 import { TonightFieldError, TonightForbiddenError, TonightNotFoundError } from "./errors";
 import { OUTCOME_LABELS, SETTLED_STATE } from "./labels";
-import { findTelescopeByRef, insertBlockExecution, isTelescopeAssistant, lockBlockForLog, type LockedBlock } from "./queries";
+import { findTelescopeByRef, insertBlockExecution, isTelescopeAssistant, loadOutcomeNoticeFacts, lockBlockForLog, type LockedBlock } from "./queries";
 import type { Viewer } from "./queue";
 import type { ExecutionLogInput } from "./schemas";
 
@@ -42,7 +44,15 @@ function checkTiming(block: LockedBlock, input: ExecutionLogInput, now: Date): v
   }
 }
 
-async function settleRequest(trx: Trx, actorId: string, requestId: string, input: ExecutionLogInput, blockId: string): Promise<LoggedExecution["request"]> {
+async function settleRequest(
+  trx: Trx,
+  actorId: string,
+  requestId: string,
+  input: ExecutionLogInput,
+  block: LockedBlock,
+  logged: { id: string; loggedAt: Date },
+): Promise<LoggedExecution["request"]> {
+  const blockId = block.id;
   const request = await lockRequest(trx, requestId);
   // A block whose request is elsewhere in its life (withdrawn after approval, say) keeps its
   // log; the request's own history is not rewritten from the night log.
@@ -59,8 +69,23 @@ async function settleRequest(trx: Trx, actorId: string, requestId: string, input
     entityId: requestId,
     details: { from: request.state, to, blockId, outcome: input.outcome, minutesUsed: input.minutesUsed },
   });
-  // TODO(notices): tell the PI when their ToO was lost (not_executed) — lib/notices has no
-  // event for an execution outcome yet; enqueue it here, inside this transaction, once it does.
+  // The PI hears what happened (above all a ToO lost to weather or a fault), in this
+  // transaction: a rolled-back log tells nobody. Each log, a correction included, is a notice.
+  const facts = await loadOutcomeNoticeFacts(trx, { requestId, blockId, actorId });
+  if (facts) {
+    await noticeOutcomeLogged(trx, {
+      executionId: logged.id,
+      requestId,
+      piUserId: request.piUserId,
+      ...facts,
+      block: { startsAt: block.startsAt, endsAt: block.endsAt },
+      outcome: input.outcome,
+      minutesUsed: input.minutesUsed,
+      note: input.note,
+      requestState: to,
+      loggedAt: logged.loggedAt,
+    });
+  }
   // TODO(ledger): a not-executed or partial ToO may change what the ToO program is charged;
   // the ledger's policy for that belongs in lib/ledger and would be called from here.
   return { id: requestId, from: request.state, to };
@@ -84,7 +109,7 @@ export async function logExecution(db: Db, actor: Viewer, blockId: string, input
       entityId: blockId,
       details: { outcome: input.outcome, minutesUsed: input.minutesUsed, note: input.note },
     });
-    const request = block.tooRequestId ? await settleRequest(trx, actor.id, block.tooRequestId, input, blockId) : null;
+    const request = block.tooRequestId ? await settleRequest(trx, actor.id, block.tooRequestId, input, block, logged) : null;
     return { id: logged.id, blockId, loggedAt: logged.loggedAt.toISOString(), request };
   });
 }

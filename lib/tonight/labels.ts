@@ -32,10 +32,10 @@ export const LIMIT_LABELS: Record<OnSkyLimit, string> = {
 };
 
 /** What a logged outcome makes of the ToO request behind the block. */
-export const SETTLED_STATE: Record<ExecutionOutcome, RequestState> = {
+export const SETTLED_STATE = {
   executed: "executed",
   partial: "partially_executed",
   aborted: "not_executed",
   weather: "not_executed",
   technical: "not_executed",
-};
+} as const satisfies Record<ExecutionOutcome, RequestState>;

@@ -323,3 +323,35 @@ export async function insertBlockExecution(
     .executeTakeFirstOrThrow();
   return { id: row.id, loggedAt: row.logged_at };
 }
+
+/** The names an outcome notice carries: the request's target and program, the block's telescope and site, the person logging. */
+export async function loadOutcomeNoticeFacts(trx: Trx, values: { requestId: string; blockId: string; actorId: string }) {
+  const row = await trx
+    .selectFrom("blocks as b")
+    .innerJoin("telescopes as t", "t.id", "b.telescope_id")
+    .innerJoin("sites as s", "s.id", "t.site_id")
+    .innerJoin("too_requests as r", (join) => join.on("r.id", "=", values.requestId))
+    .leftJoin("programs as rp", "rp.id", "r.program_id")
+    .leftJoin("programs as bp", "bp.id", "b.program_id")
+    .select([
+      "r.target_name",
+      "rp.code as request_program_code",
+      "bp.code as block_program_code",
+      "t.code as telescope_code",
+      "t.name as telescope_name",
+      "s.code as site_code",
+      "s.name as site_name",
+      "s.time_zone",
+    ])
+    .where("b.id", "=", values.blockId)
+    .executeTakeFirst();
+  const actor = await trx.selectFrom("users").select(["name", "email"]).where("id", "=", values.actorId).executeTakeFirst();
+  if (!row || !actor) return undefined;
+  return {
+    targetName: row.target_name,
+    programCode: row.request_program_code ?? row.block_program_code ?? "ToO",
+    telescope: { code: row.telescope_code, name: row.telescope_name },
+    site: { code: row.site_code, name: row.site_name, timeZone: row.time_zone },
+    loggedBy: { name: actor.name, email: actor.email },
+  };
+}

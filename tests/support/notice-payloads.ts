@@ -7,6 +7,7 @@ import { randomUUID } from "node:crypto";
 import type {
   BlockDisplacedPayload,
   DecisionMadePayload,
+  OutcomeLoggedPayload,
   PaybackScheduledPayload,
   RequestSubmittedPayload,
   SiteRef,
@@ -112,6 +113,28 @@ export function paybackScheduled(over: Partial<PaybackScheduledPayload> = {}): P
     owedBeforeHours: 1.5,
     owedAfterHours: 0,
     contact: DIRECTOR,
+    ...over,
+  };
+}
+
+export const NIGHT_ASSISTANT = { name: "Paz Irarrázabal", email: "na.aq41@nightbreak.test" };
+
+export function outcomeLogged(over: Partial<OutcomeLoggedPayload> = {}): OutcomeLoggedPayload {
+  return {
+    executionId: randomUUID(),
+    requestId: randomUUID(),
+    piUserId: randomUUID(),
+    targetName: TARGET,
+    programCode: "CON-TOO-02",
+    telescope: AQ41,
+    site: SOUTH,
+    block: { startsAt: at("2026-12-02T02:10:00Z"), endsAt: at("2026-12-02T03:40:00Z") },
+    outcome: "weather",
+    minutesUsed: null,
+    note: "Dome closed at 01:55 UT: humidity above 90 % and fog from the valley.",
+    requestState: "not_executed",
+    loggedBy: NIGHT_ASSISTANT,
+    loggedAt: at("2026-12-02T04:05:00Z"),
     ...over,
   };
 }

@@ -64,6 +64,41 @@ describe("the night log", () => {
     expect(queue.blocks[0]).toMatchObject({ state: "aborted", execution: { outcome: "aborted" } });
   });
 
+  it("tells the PI, in the same transaction, that their ToO was lost to weather; a correction is a new notice", async () => {
+    const s = await tooNight();
+    const logged = await logExecution(getDb(), s.assistant, s.tooBlock, parse({ outcome: "weather", note: "Dome closed: humidity" }), NOW);
+    const notices = () =>
+      getDb().selectFrom("notifications").select(["user_id", "event", "notice_key", "title", "body", "link"]).where("link", "=", `/requests/${s.requestId}`).orderBy("created_at").execute();
+    const rows = await notices();
+    expect(rows).toHaveLength(1);
+    const [notice] = rows as [(typeof rows)[number]];
+    expect(notice).toMatchObject({
+      user_id: s.desk.pi.id,
+      event: "outcome_logged",
+      notice_key: `outcome_logged:${logged.id}:${s.desk.pi.id}`,
+      title: "Your ToO override for Fixture Afterglow 9 on " + s.desk.telescopeCode + ": lost to weather",
+      link: `/requests/${s.requestId}`,
+    });
+    expect(notice.body).toContain(`Your override for Fixture Afterglow 9 on ${s.desk.telescopeCode} was lost to weather; nothing was observed.`);
+    expect(notice.body).toContain("2027-04-04 02:00–03:30 UT");
+    expect(notice.body).toContain("Dome closed: humidity");
+    const email = await getDb().selectFrom("email_deliveries").select(["user_id", "template"]).where("idempotency_key", "=", notice.notice_key).executeTakeFirst();
+    expect(email).toEqual({ user_id: s.desk.pi.id, template: "outcome_logged" });
+
+    // The night assistant corrects the log: the PI hears the new outcome too.
+    await logExecution(getDb(), s.assistant, s.tooBlock, parse({ outcome: "partial", minutesUsed: 40, note: "Opened again at 03:00 UT" }), NOW);
+    expect((await notices()).map((n) => n.title.split(": ").at(-1))).toEqual(["lost to weather", "partially executed"]);
+  });
+
+  it("tells nobody when the log is refused, nor about a science block or a request outside the approved path", async () => {
+    const s = await tooNight();
+    await expect(logExecution(getDb(), s.assistant, s.tooBlock, parse({ outcome: "partial", minutesUsed: 91 }), NOW)).rejects.toThrow(/at most 90 minutes/);
+    await logExecution(getDb(), s.assistant, s.science, parse({ outcome: "executed" }), NOW);
+    await getDb().updateTable("too_requests").set({ state: "withdrawn" }).where("id", "=", s.requestId).execute();
+    await logExecution(getDb(), s.assistant, s.tooBlock, parse({ outcome: "aborted" }), NOW);
+    expect(await getDb().selectFrom("notifications").select("id").where("user_id", "=", s.desk.pi.id).execute()).toEqual([]);
+  });
+
   it("logs a science block without touching any request", async () => {
     const s = await tooNight();
     const logged = await logExecution(getDb(), s.assistant, s.science, parse({ outcome: "executed" }), NOW);

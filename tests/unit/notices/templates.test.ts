@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { parseNotice, type NoticeOf } from "@/lib/notices/events";
 import { renderNoticeEmail, type RenderedEmail } from "@/lib/notices/render";
-import { blockDisplaced, decisionMade, paybackScheduled, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
+import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
 
 const APP = "https://desk.nightbreak.test";
 
@@ -143,6 +143,38 @@ describe("notice e-mails", () => {
       `${APP}/ledger`,
     );
     expectInHtml(email, "2027-01-14 03:00–04:30 UT (2027-01-14 00:00–01:30 GMT-3)", `href="${APP}/ledger"`);
+  });
+
+  it("outcome logged: lost to weather, in a plain sentence, with the block in UT and local time, the note and a link to the request", async () => {
+    const p = outcomeLogged();
+    const email = await renderAs({ event: "outcome_logged", payload: p });
+    expectCommonParts(email);
+    expect(email.subject).toBe(`Your ToO override for ${TARGET} on AQ41: lost to weather`);
+    expectInText(
+      email,
+      `Your override for ${TARGET} on AQ41 was lost to weather; nothing was observed.`,
+      "Dome closed at 01:55 UT: humidity above 90 % and fog from the valley.",
+      "Program  CON-TOO-02",
+      "Telescope  AQ41 (Quebrada 4.1 m), Alto Quebrada Station",
+      "Block  2026-12-02 02:10–03:40 UT (2026-12-01 23:10–2026-12-02 00:40 GMT-3)",
+      "Outcome  lost to weather",
+      "Request is now  not executed",
+      "Logged by  Paz Irarrázabal <na.aq41@nightbreak.test>",
+      "Logged  2026-12-02 04:05 UT (2026-12-02 01:05 GMT-3)",
+      `${APP}/requests/${p.requestId}`,
+    );
+    expect(email.text).not.toContain("Time observed");
+    expectInHtml(email, "2026-12-02 02:10–03:40 UT (2026-12-01 23:10–2026-12-02 00:40 GMT-3)", `href="${APP}/requests/${p.requestId}"`);
+
+    const fault = await renderAs({ event: "outcome_logged", payload: outcomeLogged({ outcome: "technical", note: "" }) });
+    expectInText(fault, `Your override for ${TARGET} on AQ41 was lost to a technical fault; nothing was observed.`, "The night assistant left no note.");
+
+    const partial = await renderAs({ event: "outcome_logged", payload: outcomeLogged({ outcome: "partial", minutesUsed: 40, requestState: "partially_executed", note: "Clouds from 02:50 UT." }) });
+    expect(partial.subject).toBe(`Your ToO override for ${TARGET} on AQ41: partially executed`);
+    expectInText(partial, `Your override for ${TARGET} on AQ41 was partly observed: 40 min of the 1 h 30 min block.`, "Time observed  40 min", "Request is now  partially executed");
+
+    const done = await renderAs({ event: "outcome_logged", payload: outcomeLogged({ outcome: "executed", minutesUsed: 85, requestState: "executed", note: "Seeing 0.8″." }) });
+    expectInText(done, `Your override for ${TARGET} on AQ41 was observed: 1 h 25 min on sky.`, "Request is now  executed");
   });
 
   it("renders the same bytes twice, so a retried send matches its idempotency key", async () => {

@@ -5,7 +5,7 @@ import { describeNotice } from "@/lib/notices/describe";
 import { noticeKey } from "@/lib/notices/enqueue";
 import { appBaseUrl, noticeLink } from "@/lib/notices/links";
 import { localFakeUrl } from "@/lib/notices/outbox";
-import { blockDisplaced, decisionMade, paybackScheduled, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
+import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
 
 describe("in-app notice text", () => {
   it("names the facts in UT and local time and links to the page that answers it", () => {
@@ -26,6 +26,20 @@ describe("in-app notice text", () => {
     expect(noticeLink({ event: "decision_made", payload: decision })).toBe(`/requests/${decision.requestId}`);
     expect(noticeLink({ event: "tonight_changed", payload: tonightChanged() })).toBe("/tonight/AQ41");
     expect(noticeLink({ event: "payback_scheduled", payload: paybackScheduled() })).toBe("/ledger");
+    const outcome = outcomeLogged();
+    expect(noticeLink({ event: "outcome_logged", payload: outcome })).toBe(`/requests/${outcome.requestId}`);
+  });
+
+  it("tells the PI in a plain sentence what the night log says happened to their ToO", () => {
+    const p = outcomeLogged();
+    expect(describeNotice({ event: "outcome_logged", payload: p })).toEqual({
+      title: `Your ToO override for ${TARGET} on AQ41: lost to weather`,
+      body:
+        `Your override for ${TARGET} on AQ41 was lost to weather; nothing was observed. ` +
+        "Block 2026-12-02 02:10–03:40 UT (2026-12-01 23:10–2026-12-02 00:40 GMT-3). " +
+        "Paz Irarrázabal: Dome closed at 01:55 UT: humidity above 90 % and fog from the valley.",
+      link: `/requests/${p.requestId}`,
+    });
   });
 
   it("keeps a title within 300 characters however long the target name", () => {
