@@ -52,10 +52,16 @@ export function apiRoute<P extends Params = Params>(
   };
 }
 
-/** Reads a JSON body with a size limit, answering 413/400 instead of throwing deep inside. */
+/**
+ * Reads a JSON body with a size limit, answering 413/400 instead of throwing deep inside.
+ * The limit is in UTF-8 bytes (a string's length counts UTF-16 units, a third of the bytes
+ * for most non-Latin text); a declared Content-Length over it is refused before reading.
+ */
 export async function readJson(request: Request, maxBytes = 1_000_000): Promise<unknown> {
+  const tooLarge = () => new ApiError(413, "too_large", `The body is larger than ${maxBytes} bytes.`);
+  if (Number(request.headers.get("content-length") ?? 0) > maxBytes) throw tooLarge();
   const text = await request.text();
-  if (text.length > maxBytes) throw new ApiError(413, "too_large", `The body is larger than ${maxBytes} bytes.`);
+  if (text.length > maxBytes || Buffer.byteLength(text, "utf8") > maxBytes) throw tooLarge();
   try {
     return JSON.parse(text) as unknown;
   } catch {

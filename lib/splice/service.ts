@@ -56,6 +56,10 @@ export async function lockBlocksInSlot(trx: Trx, telescopeId: string, start: Dat
 }
 
 export async function spliceOverride(trx: Trx, input: SpliceInput): Promise<SpliceResult> {
+  // Splices on one telescope take turns. Without this, a second approval that waited for
+  // the first's row locks would not see the remainder block the first one inserted, and
+  // would fail on the overlap constraint though its slot was free.
+  await trx.selectFrom("telescopes").select("id").where("id", "=", input.telescopeId).forNoKeyUpdate().execute();
   const rows = await lockBlocksInSlot(trx, input.telescopeId, input.start, input.end);
   if (rows.some((r) => r.kind === "too")) throw new OverrideInTheWayError();
   const byId = new Map(rows.map((r) => [r.id, r]));

@@ -95,6 +95,25 @@ describe("approving a request splices the schedule in one transaction", () => {
     expect(states.map((s) => s.state).sort()).toEqual(["approved", "submitted"]);
   });
 
+  it("lets two simultaneous approvals of separate slots in the same block both through", async () => {
+    const world = await makeWorld([["2027-02-07T00:00:00Z", "2027-02-07T08:00:00Z"]]);
+    const first = await makeSubmittedRequest(world, "Object C");
+    const second = await makeSubmittedRequest(world, "Object D");
+    const outcomes = await Promise.allSettled([
+      approveRequest(getDb(), world.director, { requestId: first, telescopeId: world.telescopeId, start: at("2027-02-07T01:00:00Z"), end: at("2027-02-07T02:00:00Z") }),
+      approveRequest(getDb(), world.director, { requestId: second, telescopeId: world.telescopeId, start: at("2027-02-07T05:00:00Z"), end: at("2027-02-07T06:00:00Z") }),
+    ]);
+    expect(outcomes.map((o) => o.status)).toEqual(["fulfilled", "fulfilled"]);
+    const blocks = await blocksOf(world.telescopeId);
+    expect(blocks.map((b) => [b.kind, b.starts_at.toISOString().slice(11, 16), b.ends_at.toISOString().slice(11, 16)])).toEqual([
+      ["science", "00:00", "01:00"],
+      ["too", "01:00", "02:00"],
+      ["science", "02:00", "05:00"],
+      ["too", "05:00", "06:00"],
+      ["science", "06:00", "08:00"],
+    ]);
+  });
+
   it("declines with a required reason, and returns a request to the PI as a draft with the note", async () => {
     const world = await makeWorld([]);
     const a = await makeSubmittedRequest(world);
