@@ -72,4 +72,21 @@ describe("the block API", () => {
     const bad = await call(SCHEDULE, token, { url: `${base}/schedule?telescope=${telescopeId}&from=2027-03-02T00:00:00Z&to=2027-03-01T00:00:00Z` });
     expect(bad.status).toBe(400);
   });
+
+  it("never serves a stale schedule: a move or a removal shows in the next answer", async () => {
+    const admin = await makeUser(["admin"]);
+    const token = await makeToken(admin.id);
+    const { telescopeId, programId } = await makeTelescopeAndProgram();
+    const url = `${base}/schedule?telescope=${telescopeId}&from=2027-03-05T00:00:00Z&to=2027-03-06T00:00:00Z`;
+    const created = await call(POST, token, { url: `${base}/blocks`, method: "POST", body: { telescopeId, programId, kind: "science", startsAt: "2027-03-05T01:00:00Z", endsAt: "2027-03-05T03:00:00Z" } });
+    const id = String(created.body?.id);
+    const first = await call(SCHEDULE, token, { url });
+    expect((first.body?.blocks as Array<{ startsAt: string }>).map((b) => b.startsAt)).toEqual(["2027-03-05T01:00:00.000Z"]);
+    expect((await call(SCHEDULE, token, { url })).body).toEqual(first.body);
+    await call(PATCH, token, { url: `${base}/blocks/${id}`, method: "PATCH", params: { id }, body: { startsAt: "2027-03-05T02:00:00Z", endsAt: "2027-03-05T04:00:00Z" } });
+    const moved = await call(SCHEDULE, token, { url });
+    expect((moved.body?.blocks as Array<{ startsAt: string }>).map((b) => b.startsAt)).toEqual(["2027-03-05T02:00:00.000Z"]);
+    await call(DELETE, token, { url: `${base}/blocks/${id}`, method: "DELETE", params: { id } });
+    expect((await call(SCHEDULE, token, { url })).body?.blocks).toEqual([]);
+  });
 });
