@@ -8,7 +8,8 @@ start_services() {
   export NEXTAUTH_URL="$APP_URL"
   trap stop_services EXIT INT TERM
   start_fakes "$logs"
-  (cd "$ROOT" && exec npx next start -p "$port" -H 127.0.0.1) > "$logs/app.log" 2>&1 &
+  # setsid: the app gets a process group of its own, so stop_services can end all of it.
+  setsid bash -c 'cd "$0" && exec node_modules/.bin/next start -p "$1" -H 127.0.0.1' "$ROOT" "$port" > "$logs/app.log" 2>&1 &
   SERVICE_PIDS+=($!)
   if ! wait_http "$APP_URL/api/health" 90; then
     tail -n 40 "$logs/app.log" >&2
@@ -25,8 +26,8 @@ start_fakes() {
   upload_port=$(free_port $((email_port + 1)))
   UPLOADTHING_TOKEN=$(cd "$ROOT" && node_modules/.bin/tsx --eval 'import { buildUploadThingToken } from "./lib/uploads/token.ts"; console.log(buildUploadThingToken())')
   export UPLOADTHING_TOKEN
-  (cd "$ROOT" && FAKE_EMAIL_PORT=$email_port FAKE_EMAIL_DIR="$logs/fake-email" FAKE_UPLOAD_PORT=$upload_port FAKE_UPLOAD_DIR="$logs/fake-uploads" \
-    exec node_modules/.bin/tsx scripts/fakes/start.ts) > "$logs/fakes.log" 2>&1 &
+  FAKE_EMAIL_PORT=$email_port FAKE_EMAIL_DIR="$logs/fake-email" FAKE_UPLOAD_PORT=$upload_port FAKE_UPLOAD_DIR="$logs/fake-uploads" \
+    setsid bash -c 'cd "$0" && exec node_modules/.bin/tsx scripts/fakes/start.ts' "$ROOT" > "$logs/fakes.log" 2>&1 &
   SERVICE_PIDS+=($!)
   export RESEND_BASE_URL="http://127.0.0.1:$email_port"
   export RESEND_API_KEY="re_local_nightbreak_fake"
@@ -42,8 +43,8 @@ stop_services() {
   local pid
   for pid in "${SERVICE_PIDS[@]:-}"; do
     [ -n "$pid" ] || continue
-    pkill -TERM -P "$pid" 2>/dev/null || true
-    kill -TERM "$pid" 2>/dev/null || true
+    # Each service leads its own process group (setsid): end the whole group.
+    kill -TERM -- "-$pid" 2>/dev/null || kill -TERM "$pid" 2>/dev/null || true
   done
   SERVICE_PIDS=()
 }
