@@ -2,13 +2,12 @@
  * Every route handler has the same shape: authenticate (session cookie or bearer token),
  * check the role, run, and map errors in one place (lib/api/errors.ts).
  */
-import { getServerSession } from "next-auth";
 import { getDb } from "@/db/index";
 import type { Role } from "@/db/types";
 import { findUserByToken } from "@/lib/api-tokens/queries";
-import { authOptions } from "@/lib/auth/options";
+import { getCurrentUser } from "@/lib/auth/session";
 import { hasAnyRole } from "@/lib/auth/roles";
-import { findUserById, type User } from "@/lib/users/queries";
+import type { User } from "@/lib/users/queries";
 import { ApiError, errorResponse } from "./errors";
 
 export async function authenticate(request: Request): Promise<User | null> {
@@ -20,10 +19,7 @@ export async function authenticate(request: Request): Promise<User | null> {
   }
   // Without a cookie there is no session to look up (and no request scope is needed for it).
   if (!request.headers.get("cookie")) return null;
-  const session = await getServerSession(authOptions);
-  if (!session?.user?.id) return null;
-  const user = await findUserById(getDb(), session.user.id);
-  return user && !user.disabled ? user : null;
+  return getCurrentUser();
 }
 
 type Params = Record<string, string | string[] | undefined>;

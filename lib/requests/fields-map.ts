@@ -7,7 +7,7 @@ import type { z } from "zod";
 import type { DarknessLevel, RequestUrgency, StoredEphemerisRow, TargetKind } from "@/db/types";
 import { DARKNESS_LEVELS, REQUEST_URGENCIES } from "@/db/types";
 import { formatDec, formatRa } from "@/lib/sky";
-import { idField, numberField, textField, utInstantField } from "@/lib/validation/fields";
+import { idField, numberField, utInstantField } from "@/lib/validation/fields";
 import { decField, ephemerisRowSchema, optionalNumberField, raField } from "./fields";
 import type { DraftInput, RequestInput } from "./schemas";
 
