@@ -152,7 +152,7 @@ export interface RateLimitsTable {
   expire: string | null;
 }
 
-export const NOTICE_EVENTS = ["request_submitted", "decision_made", "block_displaced", "tonight_changed", "payback_scheduled", "outcome_logged"] as const;
+export const NOTICE_EVENTS = ["request_submitted", "decision_made", "block_displaced", "tonight_changed", "payback_scheduled", "outcome_logged", "request_lapsed"] as const;
 export type NoticeEvent = (typeof NOTICE_EVENTS)[number];
 
 export const DELIVERY_STATUSES = ["queued", "sending", "retrying", "sent", "failed"] as const;
@@ -207,6 +207,9 @@ export const REQUEST_STATES = [
   "not_executed",
 ] as const;
 export type RequestState = (typeof REQUEST_STATES)[number];
+/** Filed and waiting for a director; a request still here when its deadline passes lapses. */
+export const AWAITING_DECISION_STATES = ["submitted", "in_review"] as const satisfies readonly RequestState[];
+export type AwaitingDecisionState = (typeof AWAITING_DECISION_STATES)[number];
 export const REQUEST_URGENCIES = ["now", "tonight", "within_days"] as const;
 export type RequestUrgency = (typeof REQUEST_URGENCIES)[number];
 export const DARKNESS_LEVELS = ["civil", "nautical", "astronomical"] as const;

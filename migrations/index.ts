@@ -9,6 +9,7 @@ import * as notifications from "./2026-12-01-0003-notifications";
 import * as requests from "./2026-12-01-0004-requests";
 import * as decisionsLedger from "./2026-12-01-0005-decisions-ledger";
 import * as outcomeNotice from "./2026-12-01-0006-outcome-notice";
+import * as requestLapse from "./2026-12-01-0007-request-lapse";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01-0001-foundation": foundation,
@@ -17,4 +18,5 @@ export const migrations: Record<string, Migration> = {
   "2026-12-01-0004-requests": requests,
   "2026-12-01-0005-decisions-ledger": decisionsLedger,
   "2026-12-01-0006-outcome-notice": outcomeNotice,
+  "2026-12-01-0007-request-lapse": requestLapse,
 };

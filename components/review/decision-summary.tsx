@@ -9,7 +9,15 @@ import { formatDuration, formatUt } from "@/lib/time/format";
 const VERB = { approve: "Approved", decline: "Declined", return: "Returned to the PI" } as const;
 
 /** A request no longer open for a decision: what was decided, by whom, and where to look next. */
-export function DecisionSummary({ state, record }: { state: RequestState; record: DecisionRecord | undefined }) {
+export function DecisionSummary({ state, record, deadline = null }: { state: RequestState; record: DecisionRecord | undefined; deadline?: Date | null }) {
+  if (state === "lapsed") {
+    return (
+      <Alert>
+        The PI&apos;s deadline{deadline && <> (<span className="num">{formatUt(deadline)} UT</span>)</>} passed before a decision: the request
+        lapsed and will not be scheduled. The PI has been told.
+      </Alert>
+    );
+  }
   if (!record) return <Alert>This request is {STATE_LABELS[state].toLowerCase()}: there is nothing to decide.</Alert>;
   return (
     <section aria-label="Decision" className="flex flex-col gap-2 rounded-lg border border-line bg-raised p-4">

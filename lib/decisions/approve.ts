@@ -2,17 +2,19 @@
  * Approving a request: one transaction splices the override into the schedule, books
  * the ledger, records the decision and the audit trail, logs the change for tonight's
  * queue and queues every notice. Approving the same slot twice is harmless; two directors
- * approving overlapping slots at once: the database lets exactly one through.
+ * approving overlapping slots at once: the database lets exactly one through. A request
+ * whose deadline has passed is refused (it lapses instead; see lib/requests/lapse.ts).
  */
 import type { Db, Trx } from "@/db/index";
 import { writeAudit } from "@/lib/audit/queries";
 import { getCreditRatio } from "@/lib/ledger/policy";
 import { noticeBlockDisplaced, noticeDecisionMade, noticeTonightChanged } from "@/lib/notices/notify";
+import { isPastDeadline, lapseOverdueQuietly } from "@/lib/requests/lapse";
 import { localDate } from "@/lib/time/format";
 import { OverrideInTheWayError, spliceOverride, type SpliceResult } from "@/lib/splice/service";
 import type { User } from "@/lib/users/queries";
 import { loadPrograms, loadTelescopeSite } from "./context";
-import { DecisionError, SlotTakenError } from "./errors";
+import { DeadlinePassedError, DecisionError, SlotTakenError } from "./errors";
 import { lockRequestForDecision } from "./request-row";
 
 export interface ApproveInput {
@@ -36,7 +38,8 @@ function isConstraint(error: unknown, code: string): boolean {
   return (error as { code?: string } | null)?.code === code;
 }
 
-export async function approveRequest(db: Db, director: User, input: ApproveInput): Promise<ApproveResult> {
+/** `now` decides whether the deadline has passed (tests pass their own clock). */
+export async function approveRequest(db: Db, director: User, input: ApproveInput, now: Date = new Date()): Promise<ApproveResult> {
   const start = wholeMinute(input.start);
   const end = wholeMinute(input.end);
   if (!(end > start)) throw new DecisionError("The slot must end after it starts.", 400);
@@ -51,9 +54,12 @@ export async function approveRequest(db: Db, director: User, input: ApproveInput
         const block = await trx.selectFrom("blocks").select("id").where("too_request_id", "=", request.id).executeTakeFirst();
         return { alreadyApproved: true, tooBlockId: block?.id ?? null, displacedMinutes: 0 };
       }
+      if (request.state === "lapsed" && request.deadline) throw new DeadlinePassedError(request.deadline);
       if (request.state !== "submitted" && request.state !== "in_review") {
         throw new DecisionError(`This request is ${request.state.replace("_", " ")}: it can no longer be approved.`, 409);
       }
+      // Before the minute job has lapsed it: refuse all the same.
+      if (isPastDeadline(request.deadline, now)) throw new DeadlinePassedError(request.deadline ?? now);
       if (!request.program_id || !request.semester_id || !request.partner_id) throw new DecisionError("The request has no program to charge.", 400);
       const acceptable = await trx.selectFrom("too_request_telescopes").select("telescope_id").where("request_id", "=", request.id).execute();
       if (!acceptable.some((a) => a.telescope_id === input.telescopeId)) throw new DecisionError("The PI did not accept that telescope for this request.", 400);
@@ -165,6 +171,11 @@ export async function approveRequest(db: Db, director: User, input: ApproveInput
       return { alreadyApproved: false, tooBlockId: splice.tooBlockId, displacedMinutes: splice.displacedMinutes };
     });
   } catch (error) {
+    if (error instanceof DeadlinePassedError) {
+      // The refusal rolled back; lapse it now so the review page shows it lapsed at once.
+      await lapseOverdueQuietly(db, now);
+      throw error;
+    }
     if (isConstraint(error, "23P01") || error instanceof OverrideInTheWayError) throw new SlotTakenError();
     if (isConstraint(error, "23505")) throw new SlotTakenError(" for this request");
     throw error;

@@ -1,3 +1,5 @@
+import { formatUt } from "@/lib/time/format";
+
 export class DecisionError extends Error {
   constructor(
     message: string,
@@ -11,5 +13,12 @@ export class DecisionError extends Error {
 export class SlotTakenError extends DecisionError {
   constructor(detail = "") {
     super(`Another override was approved in this slot a moment ago${detail}. Nothing was changed: look at the fresh impact and choose again.`, 409);
+  }
+}
+
+/** The PI's deadline passed before anyone decided: the request lapses instead, and an override now would be of no use. */
+export class DeadlinePassedError extends DecisionError {
+  constructor(deadline: Date) {
+    super(`The PI's deadline (${formatUt(deadline)} UT) has passed, so this request has lapsed and can no longer be approved. Nothing was changed.`, 409);
   }
 }

@@ -15,6 +15,7 @@ export async function lockRequestForDecision(trx: Trx, requestId: string) {
       "r.target_name",
       "r.duration_minutes",
       "r.urgency",
+      "r.deadline",
       "pi.name as pi_name",
       "pi.email as pi_email",
       "p.code as program_code",

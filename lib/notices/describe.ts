@@ -3,7 +3,7 @@
  * plain-text body. Pure, so the enqueue path can write it inside the caller's transaction.
  */
 import type { NoticeOf } from "./events";
-import { formatDuration, formatHours, OUTCOME_WORDS, outcomeSentence, rangeUtAndLocal, URGENCY_LABELS, utAndLocal } from "./format";
+import { formatDuration, formatHours, lapseSentence, OUTCOME_WORDS, outcomeSentence, rangeUtAndLocal, URGENCY_LABELS, utAndLocal } from "./format";
 import { noticeLink } from "./links";
 
 export interface NoticeText {
@@ -77,6 +77,13 @@ function describe(notice: NoticeOf): Omit<NoticeText, "link"> {
       return {
         title: `Your ToO override for ${p.targetName} on ${p.telescope.code}: ${OUTCOME_WORDS[p.outcome]}`,
         body: `${outcomeSentence(p)} Block ${rangeUtAndLocal(p.block.startsAt, p.block.endsAt, p.site.timeZone)}.${note}`,
+      };
+    }
+    case "request_lapsed": {
+      const p = notice.payload;
+      return {
+        title: `Your ToO request for ${p.targetName} lapsed at its deadline`,
+        body: `${lapseSentence(p)} It will not be scheduled. If ${p.targetName} is still worth observing, file a new request with a later deadline.`,
       };
     }
   }

@@ -1,12 +1,12 @@
 /**
- * The six notice events and the facts each one carries. A payload is what the e-mail
+ * The seven notice events and the facts each one carries. A payload is what the e-mail
  * and the in-app notice are written from, so it holds names and numbers, not ids to look
  * up later: the worker renders exactly what was true when the change was committed.
  * Instants are Dates in code and ISO strings inside a queued job (`z.coerce.date()`
  * reads them back). Durations are minutes, ledger balances hours.
  */
 import { z } from "zod";
-import { EXECUTION_OUTCOMES, NOTICE_EVENTS, type NoticeEvent, type Role } from "@/db/types";
+import { AWAITING_DECISION_STATES, EXECUTION_OUTCOMES, NOTICE_EVENTS, type NoticeEvent, type Role } from "@/db/types";
 
 export { NOTICE_EVENTS, type NoticeEvent };
 
@@ -154,6 +154,26 @@ export const outcomeLoggedSchema = z.object({
   loggedAt: instant,
 });
 
+/** To the PI: the request's deadline passed before a director decided, so it lapsed and will not be scheduled. */
+export const requestLapsedSchema = z.object({
+  requestId: z.uuid(),
+  piUserId: z.uuid(),
+  targetName: text(200),
+  programCode: text(40),
+  urgency: z.enum(URGENCIES),
+  /** Where it was waiting: `submitted` means no director had opened it yet. */
+  fromState: z.enum(AWAITING_DECISION_STATES),
+  submittedAt: instant,
+  deadline: instant,
+  /** When the lapse was recorded (at most about a minute after the deadline). */
+  lapsedAt: instant,
+  requestedMinutes: z.number().int().positive(),
+  /** The acceptable telescopes (empty only for a request filed without any, which the form never allows). */
+  telescopes: z.array(telescopeRefSchema),
+  /** The first acceptable telescope's site, whose local time the e-mail shows beside UT. */
+  site: siteRefSchema,
+});
+
 export const NOTICE_PAYLOAD_SCHEMAS = {
   request_submitted: requestSubmittedSchema,
   decision_made: decisionMadeSchema,
@@ -161,6 +181,7 @@ export const NOTICE_PAYLOAD_SCHEMAS = {
   tonight_changed: tonightChangedSchema,
   payback_scheduled: paybackScheduledSchema,
   outcome_logged: outcomeLoggedSchema,
+  request_lapsed: requestLapsedSchema,
 } as const satisfies Record<NoticeEvent, z.ZodType>;
 
 export type RequestSubmittedPayload = z.infer<typeof requestSubmittedSchema>;
@@ -169,6 +190,7 @@ export type BlockDisplacedPayload = z.infer<typeof blockDisplacedSchema>;
 export type TonightChangedPayload = z.infer<typeof tonightChangedSchema>;
 export type PaybackScheduledPayload = z.infer<typeof paybackScheduledSchema>;
 export type OutcomeLoggedPayload = z.infer<typeof outcomeLoggedSchema>;
+export type RequestLapsedPayload = z.infer<typeof requestLapsedSchema>;
 
 export interface NoticePayloads {
   request_submitted: RequestSubmittedPayload;
@@ -177,6 +199,7 @@ export interface NoticePayloads {
   tonight_changed: TonightChangedPayload;
   payback_scheduled: PaybackScheduledPayload;
   outcome_logged: OutcomeLoggedPayload;
+  request_lapsed: RequestLapsedPayload;
 }
 
 /** One event with its payload, discriminated by `event`. */
@@ -190,6 +213,7 @@ export const NOTICE_EVENT_LABELS: Record<NoticeEvent, { label: string; roles: re
   tonight_changed: { label: "Tonight's queue changes on my telescope", roles: ["night_assistant"] },
   payback_scheduled: { label: "A payback block is scheduled for me", roles: ["observer"] },
   outcome_logged: { label: "The night log records what happened to my ToO", roles: ["pi"] },
+  request_lapsed: { label: "My ToO request lapsed at its deadline without a decision", roles: ["pi"] },
 };
 
 /** Parses a payload (from a queued job, say) back into its typed form with Dates. */
@@ -207,5 +231,7 @@ export function parseNotice(event: NoticeEvent, payload: unknown): NoticeOf {
       return { event, payload: paybackScheduledSchema.parse(payload) };
     case "outcome_logged":
       return { event, payload: outcomeLoggedSchema.parse(payload) };
+    case "request_lapsed":
+      return { event, payload: requestLapsedSchema.parse(payload) };
   }
 }

@@ -3,7 +3,7 @@
  * site's local time beside it, durations in hours and minutes, ledger hours to 0.1 h.
  */
 import { formatDuration, formatLocal, formatUt } from "@/lib/time/format";
-import type { OutcomeLoggedPayload } from "./events";
+import type { OutcomeLoggedPayload, RequestLapsedPayload } from "./events";
 
 export function utAndLocal(at: Date, timeZone: string): string {
   return `${formatUt(at)} UT (${formatLocal(at, timeZone)})`;
@@ -67,4 +67,15 @@ export function outcomeSentence(p: OutcomeLoggedPayload): string {
         ? `${what} was ${OUTCOME_WORDS[p.outcome]} after ${formatDuration(used)} on sky; the request is recorded as not executed.`
         : `${what} was ${OUTCOME_WORDS[p.outcome]}; nothing was observed.`;
   }
+}
+
+/** Where a lapsed request was when its deadline passed, as a clause: "while it was … ". */
+export const AWAITING_WORDS: Record<RequestLapsedPayload["fromState"], string> = {
+  submitted: "waiting in the review queue",
+  in_review: "in review",
+};
+
+/** "The deadline 2026-12-03 12:00 UT (… GMT-3) passed while the request was in review; no director decided it." */
+export function lapseSentence(p: RequestLapsedPayload): string {
+  return `The deadline ${utAndLocal(p.deadline, p.site.timeZone)} passed while the request was ${AWAITING_WORDS[p.fromState]}, before a director decided it.`;
 }

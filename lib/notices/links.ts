@@ -20,6 +20,7 @@ export function noticeLink(notice: NoticeOf): string {
       return `/review/${notice.payload.requestId}`;
     case "decision_made":
     case "outcome_logged":
+    case "request_lapsed":
       return `/requests/${notice.payload.requestId}`;
     case "block_displaced":
     case "payback_scheduled":

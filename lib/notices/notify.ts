@@ -15,6 +15,7 @@ import type {
   DecisionMadePayload,
   OutcomeLoggedPayload,
   PaybackScheduledPayload,
+  RequestLapsedPayload,
   RequestSubmittedPayload,
   TonightChangedPayload,
 } from "./events";
@@ -50,4 +51,9 @@ export async function noticePaybackScheduled(trx: Trx, payload: PaybackScheduled
 /** To the request's PI (`payload.piUserId`); one notice per night-log entry (`executionId`). */
 export async function noticeOutcomeLogged(trx: Trx, payload: OutcomeLoggedPayload): Promise<EnqueueResult> {
   return enqueueNotice(trx, { event: "outcome_logged", payload, subjectId: payload.executionId, recipientIds: [payload.piUserId] });
+}
+
+/** To the request's PI (`payload.piUserId`); a request lapses once, so one notice per request. */
+export async function noticeRequestLapsed(trx: Trx, payload: RequestLapsedPayload): Promise<EnqueueResult> {
+  return enqueueNotice(trx, { event: "request_lapsed", payload, subjectId: payload.requestId, recipientIds: [payload.piUserId] });
 }

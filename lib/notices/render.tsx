@@ -9,6 +9,7 @@ import { BlockDisplacedEmail } from "@/emails/block-displaced";
 import { DecisionMadeEmail } from "@/emails/decision-made";
 import { OutcomeLoggedEmail } from "@/emails/outcome-logged";
 import { PaybackScheduledEmail } from "@/emails/payback-scheduled";
+import { RequestLapsedEmail } from "@/emails/request-lapsed";
 import { RequestSubmittedEmail } from "@/emails/request-submitted";
 import { TonightChangedEmail } from "@/emails/tonight-changed";
 import { describeNotice } from "./describe";
@@ -47,6 +48,8 @@ function element(notice: NoticeOf, ctx: RenderContext): React.ReactElement {
       return <PaybackScheduledEmail payload={notice.payload} {...ctx} />;
     case "outcome_logged":
       return <OutcomeLoggedEmail payload={notice.payload} {...ctx} />;
+    case "request_lapsed":
+      return <RequestLapsedEmail payload={notice.payload} {...ctx} />;
   }
 }
 

@@ -14,7 +14,11 @@ const windowSchema = z.object({ start: instant, end: instant, durationMinutes: z
 export const apiRequestSchema = z
   .object({
     id: z.uuid(),
-    state: z.enum(REQUEST_STATES),
+    state: z.enum(REQUEST_STATES).meta({
+      description:
+        "draft → submitted → in_review → approved | declined | withdrawn | lapsed; approved → executed | partially_executed | not_executed. " +
+        "A request still submitted or in review when its deadline passes becomes `lapsed` (within about a minute; the PI is notified) and can no longer be approved. Drafts never lapse.",
+    }),
     source: z.enum(["form", "api"]),
     programId: z.uuid().nullable(),
     programCode: z.string().nullable(),
@@ -47,7 +51,7 @@ export const apiRequestSchema = z
     durationMinutes: z.number().int().nullable(),
     earliestStart: instant.nullable(),
     latestEnd: instant.nullable(),
-    deadline: instant.nullable(),
+    deadline: instant.nullable().meta({ description: "When the result stops being useful: an undecided request lapses after it." }),
     urgency: z.enum(REQUEST_URGENCIES).nullable(),
     constraints: z.object({
       maxAirmass: z.number().nullable(),

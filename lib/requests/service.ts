@@ -152,6 +152,7 @@ export async function withdrawRequest(db: Db, actor: Actor, id: string, note = "
     if (!row || row.piUserId !== actor.id) throw new RequestNotFoundError();
     if (row.state === "draft") throw new RequestStateError("A draft has not been filed, so there is nothing to withdraw.");
     if (row.state === "withdrawn") throw new RequestStateError("This request has already been withdrawn.");
+    if (row.state === "lapsed") throw new RequestStateError("This request lapsed at its deadline before a decision; there is nothing left to withdraw.");
     if (!WITHDRAWABLE.includes(row.state)) {
       throw new RequestStateError("Only a submitted request or one in review can be withdrawn; ask the director about a decided one.");
     }

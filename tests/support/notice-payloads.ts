@@ -9,6 +9,7 @@ import type {
   DecisionMadePayload,
   OutcomeLoggedPayload,
   PaybackScheduledPayload,
+  RequestLapsedPayload,
   RequestSubmittedPayload,
   SiteRef,
   TelescopeRef,
@@ -135,6 +136,24 @@ export function outcomeLogged(over: Partial<OutcomeLoggedPayload> = {}): Outcome
     requestState: "not_executed",
     loggedBy: NIGHT_ASSISTANT,
     loggedAt: at("2026-12-02T04:05:00Z"),
+    ...over,
+  };
+}
+
+export function requestLapsed(over: Partial<RequestLapsedPayload> = {}): RequestLapsedPayload {
+  return {
+    requestId: randomUUID(),
+    piUserId: randomUUID(),
+    targetName: TARGET,
+    programCode: "CON-TOO-02",
+    urgency: "within_days",
+    fromState: "in_review",
+    submittedAt: at("2026-12-01T21:47:00Z"),
+    deadline: at("2026-12-03T12:00:00Z"),
+    lapsedAt: at("2026-12-03T12:00:40Z"),
+    requestedMinutes: 90,
+    telescopes: [AQ41, AQ16],
+    site: SOUTH,
     ...over,
   };
 }

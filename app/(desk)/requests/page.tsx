@@ -7,6 +7,7 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
 import { requirePageRole } from "@/lib/auth/session";
 import { URGENCY_SHORT } from "@/lib/requests/labels";
+import { lapseOverdueQuietly } from "@/lib/requests/lapse";
 import { listRequestsForPi } from "@/lib/requests/queries";
 import { formatUt } from "@/lib/time/format";
 
@@ -14,7 +15,10 @@ export const metadata: Metadata = { title: "ToO requests" };
 
 export default async function RequestsPage() {
   const user = await requirePageRole("pi");
-  const requests = await listRequestsForPi(getDb(), user.id);
+  const db = getDb();
+  // A request past its deadline shows as lapsed at once, not only after the minute job's next run.
+  await lapseOverdueQuietly(db);
+  const requests = await listRequestsForPi(db, user.id);
   return (
     <>
       <PageHeader title="ToO requests">

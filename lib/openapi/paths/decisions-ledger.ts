@@ -82,12 +82,16 @@ export function registerDecisionLedgerPaths(registry: OpenAPIRegistry): void {
     description:
       "Approve a slot (the schedule is spliced in one transaction: displaced blocks are trimmed, split or removed, the ledger is booked and everyone affected is told), " +
       "decline with a reason, or return the request to the PI with a note. Approving the same slot again is harmless. " +
-      "If another override took part of the slot a moment ago the answer is 409 `slot_taken` with the slot's fresh impact. Role: director.",
+      "If another override took part of the slot a moment ago the answer is 409 `slot_taken` with the slot's fresh impact. " +
+      "A request whose deadline has passed cannot be approved (409 `conflict`; it lapses instead). Role: director.",
     security: BEARER,
     request: { params: uuidParams, body: jsonBody(decisionSchema.meta({ id: "DecisionInput" })) },
     responses: {
       200: json(decisionAnswer, "Decided."),
-      409: json(errorSchema.extend({ impact: impactSchema.nullable() }), "The request is no longer open, or the slot was taken (`slot_taken`, with the fresh impact)."),
+      409: json(
+        errorSchema.extend({ impact: impactSchema.nullable() }),
+        "The request is no longer open (decided, withdrawn or lapsed), its deadline has passed, or the slot was taken (`slot_taken`, with the fresh impact).",
+      ),
       ...errors(400, 403, 404),
     },
   });

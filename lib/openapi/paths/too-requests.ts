@@ -54,7 +54,7 @@ export function registerTooRequestPaths(registry: OpenAPIRegistry): void {
     path: "/api/v1/too-requests/{id}/withdraw",
     tags: ["ToO requests"],
     summary: "Withdraw a request",
-    description: "The PI withdraws a submitted or in-review request. The body is optional.",
+    description: "The PI withdraws a submitted or in-review request; a decided or lapsed one answers 409. The body is optional.",
     security: BEARER,
     request: { params: uuidParams, body: { required: false, content: { "application/json": { schema: withdrawSchema } } } },
     responses: { 200: json(requestEnvelope, "The withdrawn request."), ...errors(400, 403, 404, 409) },

@@ -84,6 +84,19 @@ describe("POST /api/v1/too-requests/{id}/decision", () => {
     expect((await decide(token, c, { decision: "return", note: "Add a finding chart." })).body).toMatchObject({ state: "draft" });
   });
 
+  it("answers 409 with a plain reason to an approval after the PI's deadline, and the request lapses", async () => {
+    const world = await makeWorld([["2027-06-06T00:00:00Z", "2027-06-06T04:00:00Z"]]);
+    const token = await directorToken(world);
+    const deadline = new Date(Date.now() - 3_600_000);
+    const id = await makeSubmittedRequest(world, "Too late", { earliestStart: new Date(deadline.getTime() - 86_400_000), deadline });
+    const answer = await decide(token, id, { decision: "approve", telescopeId: world.telescopeId, start: "2027-06-06T01:00:00Z", end: "2027-06-06T02:00:00Z" });
+    expect(answer.status).toBe(409);
+    expect(answer.body.error?.code).toBe("conflict");
+    expect(answer.body.error?.message).toMatch(/^The PI's deadline \(.+ UT\) has passed, so this request has lapsed and can no longer be approved\. Nothing was changed\.$/);
+    const row = await getDb().selectFrom("too_requests").select("state").where("id", "=", id).executeTakeFirstOrThrow();
+    expect(row.state).toBe("lapsed");
+  });
+
   it("lets exactly one of many concurrent overlapping approvals through; the others get 409 with the fresh impact", async () => {
     const world = await makeWorld([["2027-06-03T00:00:00Z", "2027-06-03T04:00:00Z"], ["2027-06-03T04:00:00Z", "2027-06-03T08:00:00Z"]]);
     const token = await directorToken(world);

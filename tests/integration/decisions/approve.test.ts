@@ -2,7 +2,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db/index";
 import { approveRequest } from "@/lib/decisions/approve";
 import { declineRequest, returnRequest } from "@/lib/decisions/decline";
-import { DecisionError, SlotTakenError } from "@/lib/decisions/errors";
+import { DeadlinePassedError, DecisionError, SlotTakenError } from "@/lib/decisions/errors";
 import { closeNoticeQueue } from "@/lib/notices/queue";
 import { at, makeSubmittedRequest, makeWorld } from "./world";
 
@@ -112,6 +112,35 @@ describe("approving a request splices the schedule in one transaction", () => {
       ["too", "05:00", "06:00"],
       ["science", "06:00", "08:00"],
     ]);
+  });
+
+  it("refuses to approve a request whose deadline has passed, changes nothing in the schedule or the ledger, and lapses it", async () => {
+    const world = await makeWorld([["2027-02-08T00:00:00Z", "2027-02-08T04:00:00Z"]]);
+    const hour = 3_600_000;
+    const deadline = new Date(Math.floor(Date.now() / 60_000) * 60_000 - hour);
+    const requestId = await makeSubmittedRequest(world, "Faded transient", { earliestStart: new Date(deadline.getTime() - 48 * hour), deadline, state: "in_review" });
+    const slot = { requestId, telescopeId: world.telescopeId, start: at("2027-02-08T01:00:00Z"), end: at("2027-02-08T02:00:00Z") };
+
+    const refusal = await approveRequest(getDb(), world.director, slot).catch((e: unknown) => e);
+    expect(refusal).toBeInstanceOf(DeadlinePassedError);
+    expect((refusal as DeadlinePassedError).status).toBe(409);
+    expect((refusal as Error).message).toBe(
+      `The PI's deadline (${deadline.toISOString().slice(0, 16).replace("T", " ")} UT) has passed, so this request has lapsed and can no longer be approved. Nothing was changed.`,
+    );
+    const db = getDb();
+    expect((await blocksOf(world.telescopeId)).map((b) => b.kind)).toEqual(["science"]);
+    expect(await db.selectFrom("ledger_entries").select("id").where("request_id", "=", requestId).execute()).toEqual([]);
+    expect(await db.selectFrom("request_decisions").select("id").where("request_id", "=", requestId).execute()).toEqual([]);
+    expect(await db.selectFrom("schedule_changes").select("id").where("request_id", "=", requestId).execute()).toEqual([]);
+    // Lapsed at once rather than at the minute job's next run; the PI hears it lapsed, not that it was decided.
+    expect((await db.selectFrom("too_requests").select("state").where("id", "=", requestId).executeTakeFirstOrThrow()).state).toBe("lapsed");
+    const events = await db.selectFrom("request_events").select(["from_state", "to_state", "actor_user_id"]).where("request_id", "=", requestId).execute();
+    expect(events).toEqual([{ from_state: "in_review", to_state: "lapsed", actor_user_id: null }]);
+    const notices = await db.selectFrom("notifications").select(["user_id", "event"]).where("notice_key", "like", `%${requestId}%`).execute();
+    expect(notices).toEqual([{ user_id: world.piId, event: "request_lapsed" }]);
+
+    // Once lapsed, the same answer.
+    await expect(approveRequest(getDb(), world.director, slot)).rejects.toThrow(/has passed, so this request has lapsed and can no longer be approved/);
   });
 
   it("declines with a required reason, and returns a request to the PI as a draft with the note", async () => {

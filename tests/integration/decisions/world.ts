@@ -31,7 +31,11 @@ export async function makeWorld(blocks: Array<[string, string, string?]>) {
   return { ...base, observer, director: directorUser, tooProgramId: tooProgram.id, instrumentId: instrument.id, blockIds };
 }
 
-export async function makeSubmittedRequest(world: Awaited<ReturnType<typeof makeWorld>>, targetName = "Fixture comet") {
+export async function makeSubmittedRequest(
+  world: Awaited<ReturnType<typeof makeWorld>>,
+  targetName = "Fixture comet",
+  window: { earliestStart?: Date; deadline?: Date; state?: "submitted" | "in_review" } = {},
+) {
   const db = getDb();
   const request = await db
     .insertInto("too_requests")
@@ -44,11 +48,12 @@ export async function makeSubmittedRequest(world: Awaited<ReturnType<typeof make
       dec_deg: -20,
       instrument_id: world.instrumentId,
       duration_minutes: 60,
-      earliest_start: at("2027-01-01T00:00:00Z"),
+      earliest_start: window.earliestStart ?? at("2027-01-01T00:00:00Z"),
       latest_end: at("2027-06-01T00:00:00Z"),
-      deadline: at("2027-06-01T00:00:00Z"),
+      // Far off by default, so approving never meets the passed-deadline refusal whatever day the suite runs.
+      deadline: window.deadline ?? at("2099-01-01T00:00:00Z"),
       urgency: "within_days",
-      state: "submitted",
+      state: window.state ?? "submitted",
       submitted_at: new Date(),
     })
     .returning("id")

@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { parseNotice, type NoticeOf } from "@/lib/notices/events";
 import { renderNoticeEmail, type RenderedEmail } from "@/lib/notices/render";
-import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
+import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestLapsed, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
 
 const APP = "https://desk.nightbreak.test";
 
@@ -175,6 +175,33 @@ describe("notice e-mails", () => {
 
     const done = await renderAs({ event: "outcome_logged", payload: outcomeLogged({ outcome: "executed", minutesUsed: 85, requestState: "executed", note: "Seeing 0.8″." }) });
     expectInText(done, `Your override for ${TARGET} on AQ41 was observed: 1 h 25 min on sky.`, "Request is now  executed");
+  });
+
+  it("request lapsed: the deadline passed before a decision, in UT and local time, what it means and a link to the request", async () => {
+    const p = requestLapsed();
+    const email = await renderAs({ event: "request_lapsed", payload: p });
+    expectCommonParts(email);
+    expect(email.subject).toBe(`Your ToO request for ${TARGET} lapsed at its deadline`);
+    expectInText(
+      email,
+      "The deadline 2026-12-03 12:00 UT (2026-12-03 09:00 GMT-3) passed while the request was in review, before a director decided it.",
+      "will not be scheduled and no time is charged to CON-TOO-02",
+      "file a new request with a later deadline",
+      "Program  CON-TOO-02",
+      "Urgency  within days",
+      "Requested time  1 h 30 min",
+      "Telescopes  AQ41 (Quebrada 4.1 m), AQ16 (Quebrada 1.6 m)",
+      "Submitted  2026-12-01 21:47 UT (2026-12-01 18:47 GMT-3)",
+      "Deadline  2026-12-03 12:00 UT (2026-12-03 09:00 GMT-3)",
+      "Was  in review",
+      "Lapsed  2026-12-03 12:00 UT (2026-12-03 09:00 GMT-3)",
+      `${APP}/requests/${p.requestId}`,
+    );
+    expectInHtml(email, "2026-12-03 12:00 UT (2026-12-03 09:00 GMT-3)", `href="${APP}/requests/${p.requestId}"`);
+
+    const unopened = await renderAs({ event: "request_lapsed", payload: requestLapsed({ fromState: "submitted", telescopes: [] }) });
+    expectInText(unopened, "while the request was waiting in the review queue", "Was  waiting in the review queue");
+    expect(unopened.text).not.toContain("Telescopes");
   });
 
   it("renders the same bytes twice, so a retried send matches its idempotency key", async () => {

@@ -5,7 +5,7 @@ import { describeNotice } from "@/lib/notices/describe";
 import { noticeKey } from "@/lib/notices/enqueue";
 import { appBaseUrl, noticeLink } from "@/lib/notices/links";
 import { localFakeUrl } from "@/lib/notices/outbox";
-import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
+import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestLapsed, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
 
 describe("in-app notice text", () => {
   it("names the facts in UT and local time and links to the page that answers it", () => {
@@ -28,6 +28,20 @@ describe("in-app notice text", () => {
     expect(noticeLink({ event: "payback_scheduled", payload: paybackScheduled() })).toBe("/ledger");
     const outcome = outcomeLogged();
     expect(noticeLink({ event: "outcome_logged", payload: outcome })).toBe(`/requests/${outcome.requestId}`);
+    const lapsed = requestLapsed();
+    expect(noticeLink({ event: "request_lapsed", payload: lapsed })).toBe(`/requests/${lapsed.requestId}`);
+  });
+
+  it("tells the PI that the deadline passed before a decision, in UT and local time, and what they can do", () => {
+    const p = requestLapsed();
+    expect(describeNotice({ event: "request_lapsed", payload: p })).toEqual({
+      title: `Your ToO request for ${TARGET} lapsed at its deadline`,
+      body:
+        "The deadline 2026-12-03 12:00 UT (2026-12-03 09:00 GMT-3) passed while the request was in review, before a director decided it. " +
+        `It will not be scheduled. If ${TARGET} is still worth observing, file a new request with a later deadline.`,
+      link: `/requests/${p.requestId}`,
+    });
+    expect(describeNotice({ event: "request_lapsed", payload: requestLapsed({ fromState: "submitted" }) }).body).toContain("while the request was waiting in the review queue,");
   });
 
   it("tells the PI in a plain sentence what the night log says happened to their ToO", () => {

@@ -19,6 +19,7 @@ import { computeFeasibility } from "@/lib/requests/feasibility/compute";
 import { feasibilityInputOf } from "@/lib/requests/feasibility/from-request";
 import { loadFormOptions } from "@/lib/requests/form-options";
 import { requestFormValues } from "@/lib/requests/form-values";
+import { lapseOverdueQuietly } from "@/lib/requests/lapse";
 import { listRequestEvents } from "@/lib/requests/queries";
 import { findInstrumentOption, listTelescopesForSky } from "@/lib/requests/reference-queries";
 import { findRequestForViewer } from "@/lib/requests/service";
@@ -46,6 +47,8 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
   const { id } = await params;
   if (!z.uuid().safeParse(id).success) notFound();
   const db = getDb();
+  // Past its deadline an undecided request lapses before it is shown (the minute job may not have run yet).
+  await lapseOverdueQuietly(db);
   const request = await findRequestForViewer(db, user, id);
   if (!request) notFound();
   const [events, attachments] = await Promise.all([listRequestEvents(db, id), listAttachments(db, id)]);
@@ -91,6 +94,14 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
           {mayWithdraw && <WithdrawForm requestId={id} action={withdrawRequestAction} />}
         </div>
       </PageHeader>
+      {request.state === "lapsed" && (
+        <div className="mb-4">
+          <Alert tone="caution">
+            The deadline{request.deadline && <> ({formatUt(request.deadline)} UT)</>} passed before a director decided: this request lapsed and will
+            not be scheduled. If the target is still worth observing, file a new request with a later deadline.
+          </Alert>
+        </div>
+      )}
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
         <div className="flex flex-col gap-6">
           <Section title="Request">

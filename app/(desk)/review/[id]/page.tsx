@@ -14,6 +14,7 @@ import { requirePageRole } from "@/lib/auth/session";
 import { computeFeasibility } from "@/lib/requests/feasibility/compute";
 import { feasibilityInputOf } from "@/lib/requests/feasibility/from-request";
 import { findRequestById } from "@/lib/requests/queries";
+import { lapseOverdueQuietly } from "@/lib/requests/lapse";
 import { findInstrumentOption, listTelescopesForSky } from "@/lib/requests/reference-queries";
 import { findLatestDecision } from "@/lib/review/decision-record";
 import { markInReview } from "@/lib/review/service";
@@ -31,13 +32,16 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
   const { id } = await params;
   if (!z.uuid().safeParse(id).success) notFound();
   const db = getDb();
+  const now = new Date();
+  // A request past its deadline lapses first: it is not opened for review, nor offered a decision.
+  await lapseOverdueQuietly(db, now);
   // Opening a submitted request puts it in review: the PI sees that a director is on it.
   await markInReview(db, director, id);
   // A request returned to the PI is a draft again: the director still sees what was decided.
+  // A lapsed one was never decided (an earlier return to the PI is not the answer to show).
   const request = await findRequestById(db, id);
-  const record = request && !OPEN.includes(request.state) ? await findLatestDecision(db, id) : undefined;
+  const record = request && !OPEN.includes(request.state) && request.state !== "lapsed" ? await findLatestDecision(db, id) : undefined;
   if (!request || (request.state === "draft" && record?.decision !== "return")) notFound();
-  const now = new Date();
   const open = OPEN.includes(request.state);
 
   const ids = request.telescopes.map((t) => t.id);
@@ -77,7 +81,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
         {open && slots ? (
           <ReviewDesk requestId={id} telescopes={acceptable} suggestions={slots.suggestions} reason={slots.reason} initialSlot={initialSlot} action={decideAction} />
         ) : (
-          <DecisionSummary state={request.state} record={record} />
+          <DecisionSummary state={request.state} record={record} deadline={request.deadline} />
         )}
       </div>
     </>
