@@ -48,6 +48,9 @@ function strictTransportSecurity() {
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   poweredByHeader: false,
+  // Compression belongs to the load balancer in front (README, Operations); the schedule API
+  // gzips its large answers once per schedule version itself (lib/schedule/schedule-cache.ts).
+  compress: false,
   reactStrictMode: true,
   // forbidden() / unauthorized() give signed-in users without a role a real 403 page.
   experimental: { authInterrupts: true },

@@ -1,6 +1,6 @@
 import { createHash } from "node:crypto";
 import type { Db, Trx } from "@/db/index";
-import { findUserById, type User } from "@/lib/users/queries";
+import { findUserByTokenHash, type User } from "@/lib/users/queries";
 
 export function hashToken(token: string): string {
   return createHash("sha256").update(token).digest("hex");
@@ -9,15 +9,14 @@ export function hashToken(token: string): string {
 /** The user behind a bearer token, or undefined when the token is unknown, revoked or its user disabled. */
 export async function findUserByToken(db: Db, token: string): Promise<User | undefined> {
   const hash = hashToken(token);
-  const row = await db.selectFrom("api_tokens").select(["user_id", "last_used_at"]).where("token_hash", "=", hash).where("revoked_at", "is", null).executeTakeFirst();
-  if (!row) return undefined;
+  const found = await findUserByTokenHash(db, hash);
+  if (!found) return undefined;
   // Record use at most once a minute: a write (and its row lock) on every request would
   // serialise a busy pipeline's calls on one token.
-  if (!row.last_used_at || Date.now() - row.last_used_at.getTime() > 60_000) {
+  if (!found.tokenLastUsedAt || Date.now() - found.tokenLastUsedAt.getTime() > 60_000) {
     await db.updateTable("api_tokens").set({ last_used_at: new Date() }).where("token_hash", "=", hash).execute();
   }
-  const user = await findUserById(db, row.user_id);
-  return user && !user.disabled ? user : undefined;
+  return found.user.disabled ? undefined : found.user;
 }
 
 /** A personal API token as its owner sees it: never the secret, only its visible prefix. */

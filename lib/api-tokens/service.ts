@@ -9,6 +9,7 @@ import type { Db } from "@/db/index";
 import { writeAudit } from "@/lib/audit/queries";
 import { consumeAttempt } from "@/lib/auth/rate-limit";
 import { hashToken, insertApiToken, revokeApiToken, type ApiToken } from "./queries";
+import { forgetTokenUsers } from "./token-cache";
 
 export const TOKEN_PREFIX = "nbk_";
 const VISIBLE = TOKEN_PREFIX.length + 8;
@@ -47,4 +48,5 @@ export async function revokeOwnApiToken(db: Db, userId: string, id: string): Pro
     if (!(await revokeApiToken(trx, userId, id))) throw new TokenNotFoundError();
     await writeAudit(trx, { actorUserId: userId, action: "api_token.revoke", entity: "api_token", entityId: id });
   });
+  forgetTokenUsers();
 }

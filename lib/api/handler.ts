@@ -4,7 +4,7 @@
  */
 import { getDb } from "@/db/index";
 import type { Role } from "@/db/types";
-import { findUserByToken } from "@/lib/api-tokens/queries";
+import { userByTokenReused } from "@/lib/api-tokens/token-cache";
 import { getCurrentUser } from "@/lib/auth/session";
 import { hasAnyRole } from "@/lib/auth/roles";
 import type { User } from "@/lib/users/queries";
@@ -13,7 +13,7 @@ import { ApiError, errorResponse } from "./errors";
 export async function authenticate(request: Request): Promise<User | null> {
   const header = request.headers.get("authorization");
   if (header?.startsWith("Bearer ")) {
-    const user = await findUserByToken(getDb(), header.slice(7).trim());
+    const user = await userByTokenReused(getDb(), header.slice(7).trim());
     if (!user) throw new ApiError(401, "invalid_token", "The API token is unknown or has been revoked.");
     return user;
   }

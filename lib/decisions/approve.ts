@@ -12,6 +12,7 @@ import { noticeBlockDisplaced, noticeDecisionMade, noticeTonightChanged } from "
 import { isPastDeadline, lapseOverdueQuietly } from "@/lib/requests/lapse";
 import { localDate } from "@/lib/time/format";
 import { OverrideInTheWayError, spliceOverride, type SpliceResult } from "@/lib/splice/service";
+import { scheduleChanged } from "@/lib/schedule/after-write";
 import type { User } from "@/lib/users/queries";
 import { loadPrograms, loadTelescopeSite } from "./context";
 import { DeadlinePassedError, DecisionError, SlotTakenError } from "./errors";
@@ -169,7 +170,7 @@ export async function approveRequest(db: Db, director: User, input: ApproveInput
         ],
       });
       return { alreadyApproved: false, tooBlockId: splice.tooBlockId, displacedMinutes: splice.displacedMinutes };
-    });
+    }).finally(scheduleChanged); // the schedule answers and tonight's queue must show the override at once
   } catch (error) {
     if (error instanceof DeadlinePassedError) {
       // The refusal rolled back; lapse it now so the review page shows it lapsed at once.

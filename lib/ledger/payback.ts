@@ -18,6 +18,7 @@ import type { User } from "@/lib/users/queries";
 import { hours } from "./balances";
 import { findOwedMinutes } from "./queries";
 import type { PaybackInput } from "./schemas";
+import { scheduleChanged } from "@/lib/schedule/after-write";
 
 export class PaybackRefusedError extends UserFacingError {}
 
@@ -111,7 +112,7 @@ export async function schedulePayback(db: Db, actor: Pick<User, "id" | "name" | 
         });
       }
       return { blockId: block.id, minutes, owedBeforeMinutes: owed, owedAfterMinutes: owed - minutes, observerUserId };
-    });
+    }).finally(scheduleChanged); // the calendar and tonight's queue show the payback block at once
   } catch (error) {
     if (isOverlapViolation(error)) throw new BlockConflictError(await findOverlappingBlocks(db, input.telescopeId, start, end));
     throw error;

@@ -7,6 +7,7 @@ import { writeAudit } from "@/lib/audit/queries";
 import { formatUt } from "@/lib/time/format";
 import { findOverlappingBlocks, type ScheduledBlock } from "./queries";
 import type { BlockInput, BlockPatch } from "./schemas";
+import { scheduleChanged } from "@/lib/schedule/after-write";
 
 export class BlockConflictError extends Error {
   constructor(readonly conflicting: ScheduledBlock[]) {
@@ -70,6 +71,8 @@ export async function createBlock(db: Db, actorId: string, input: BlockInput): P
   } catch (error) {
     if (isOverlapViolation(error)) throw await conflictFor(db, input.telescopeId, input.startsAt, input.endsAt);
     throw error;
+  } finally {
+    scheduleChanged();
   }
 }
 
@@ -112,6 +115,8 @@ export async function updateBlock(db: Db, actorId: string, id: string, patch: Bl
   } catch (error) {
     if (isOverlapViolation(error) && target) throw await conflictFor(db, target.telescopeId, target.startsAt, target.endsAt, id);
     throw error;
+  } finally {
+    scheduleChanged();
   }
 }
 
@@ -127,4 +132,5 @@ export async function deleteBlock(db: Db, actorId: string, id: string): Promise<
       details: { telescopeId: row.telescope_id, programId: row.program_id, startsAt: row.starts_at, endsAt: row.ends_at, kind: row.kind },
     });
   });
+  scheduleChanged();
 }

@@ -11,9 +11,10 @@ import { findLastAcknowledgement, findLatestChangeId, findTelescopeByRef, insert
 import type { Viewer } from "./queue";
 import type { AcknowledgeInput } from "./schemas";
 import type { QueueAcknowledgement } from "./types";
+import { forgetNightSnapshots } from "./night-snapshots";
 
 export async function acknowledgeChanges(db: Db, actor: Viewer & { name: string }, telescopeRef: string, input: AcknowledgeInput): Promise<QueueAcknowledgement> {
-  return db.transaction().execute(async (trx) => {
+  const acknowledged = await db.transaction().execute(async (trx) => {
     const telescope = await findTelescopeByRef(trx, telescopeRef);
     if (!telescope) throw new TonightNotFoundError(`There is no telescope "${telescopeRef}".`);
     if (!canOperate(actor.roles, await isTelescopeAssistant(trx, telescope.id, actor.id))) {
@@ -36,4 +37,6 @@ export async function acknowledgeChanges(db: Db, actor: Viewer & { name: string 
     });
     return { userName: actor.name, at: at.toISOString(), throughChangeId: input.throughChangeId };
   });
+  forgetNightSnapshots();
+  return acknowledged;
 }

@@ -16,6 +16,7 @@ import { OUTCOME_LABELS, SETTLED_STATE } from "./labels";
 import { findTelescopeByRef, insertBlockExecution, isTelescopeAssistant, loadOutcomeNoticeFacts, lockBlockForLog, type LockedBlock } from "./queries";
 import type { Viewer } from "./queue";
 import type { ExecutionLogInput } from "./schemas";
+import { forgetNightSnapshots } from "./night-snapshots";
 
 /** States from which a logged outcome may settle (or re-settle) a request. */
 const SETTLEABLE: readonly RequestState[] = ["approved", "executed", "partially_executed", "not_executed"];
@@ -92,7 +93,7 @@ async function settleRequest(
 }
 
 export async function logExecution(db: Db, actor: Viewer, blockId: string, input: ExecutionLogInput, now = new Date()): Promise<LoggedExecution> {
-  return db.transaction().execute(async (trx) => {
+  const result = await db.transaction().execute(async (trx) => {
     const block = await lockBlockForLog(trx, blockId);
     if (!block) throw new TonightNotFoundError("That block no longer exists: the schedule may have changed. Reload the queue.");
     const assigned = await isTelescopeAssistant(trx, block.telescopeId, actor.id);
@@ -112,4 +113,6 @@ export async function logExecution(db: Db, actor: Viewer, blockId: string, input
     const request = block.tooRequestId ? await settleRequest(trx, actor.id, block.tooRequestId, input, block, logged) : null;
     return { id: logged.id, blockId, loggedAt: logged.loggedAt.toISOString(), request };
   });
+  forgetNightSnapshots();
+  return result;
 }

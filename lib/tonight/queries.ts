@@ -3,7 +3,7 @@
  * here; functions taking `trx: Trx` run inside the caller's transaction.
  */
 import { sql } from "kysely";
-import { jsonArrayFrom, jsonObjectFrom } from "kysely/helpers/postgres";
+import { jsonArrayFrom } from "kysely/helpers/postgres";
 import type { Db, Trx } from "@/db/index";
 import type { BlockKind, DarknessLevel, ExecutionOutcome, RequestState, StoredEphemerisRow, TargetKind } from "@/db/types";
 import type { Site } from "@/lib/sky";
@@ -193,34 +193,31 @@ const toAcknowledgement = (r: { name: string; at: string; through_change_id: num
   throughChangeId: Number(r.through_change_id),
 });
 
-export interface QueueSnapshot {
-  /** The viewer may acknowledge and log here (admin, or a night assistant of this telescope). */
-  operate: boolean;
-  blocks: QueueBlockRow[];
-  /** Unacknowledged changes, oldest first, and how many there are in all. */
-  changes: { items: QueueChange[]; total: number };
-  recent: QueueAcknowledgement[];
-  mine: QueueAcknowledgement | null;
+/** Each person's latest acknowledgement on a telescope and the highest change they acknowledged. */
+export interface Acknowledger {
+  userId: string;
+  last: QueueAcknowledgement;
+  highest: number;
 }
 
 /**
- * Everything the queue shows besides the sky, in one round trip (the route is polled
- * every few seconds by every open page): the night's blocks with their latest log and
- * ToO request, the changes after the acknowledgement watermark that still matter (ending
- * after `changesSince`), and who acknowledged what. The watermark is the viewer's own
- * when they may acknowledge, otherwise the telescope's (any night assistant's).
+ * Everything the queue shows besides the sky, for every viewer at once: the night's blocks
+ * with their latest log and ToO request, the newest changes that still matter (ending after
+ * `changesSince`), the telescope's night assistants and who acknowledged what. One viewer's
+ * view of it is lib/tonight/viewer-view.ts.
  */
-export async function loadQueueSnapshot(
-  db: Db | Trx,
-  q: { telescopeId: string; userId: string; isAdmin: boolean; isNightAssistant: boolean; from: Date; to: Date; changesSince: Date; changesLimit: number; acknowledgementsLimit: number },
-): Promise<QueueSnapshot> {
-  // The rule of access.ts canOperate, in SQL so the watermark can depend on it.
-  const operate = sql<boolean>`(${q.isAdmin} or (${q.isNightAssistant} and exists (
-    select 1 from telescope_assistants ta where ta.telescope_id = ${q.telescopeId} and ta.user_id = ${q.userId})))`;
-  // ids are bigserial: compared in SQL, where they are numbers, not the strings db/types declares.
-  const watermark = sql<number>`coalesce((select max(k.through_change_id) from change_acknowledgements k
-    where k.telescope_id = ${q.telescopeId} and (k.user_id = ${q.userId} or not ${operate})), 0)`;
-  const changes = db
+export interface NightSnapshot {
+  blocks: QueueBlockRow[];
+  /** Oldest first: all of them when `changesComplete`, otherwise only the newest `changesCap`. */
+  changes: QueueChange[];
+  changesComplete: boolean;
+  assistantIds: string[];
+  acknowledgers: Acknowledger[];
+  recent: QueueAcknowledgement[];
+}
+
+function changesQuery(db: Db | Trx, telescopeId: string, changesSince: Date) {
+  return db
     .selectFrom("schedule_changes as c")
     .leftJoin("too_requests as r", "r.id", "c.request_id")
     .select([
@@ -235,42 +232,79 @@ export async function loadQueueSnapshot(
       "r.target_name",
       sql<number>`count(*) over ()`.as("total"),
     ])
-    .where("c.telescope_id", "=", q.telescopeId)
-    .where("c.ends_at", ">", q.changesSince)
-    .where(sql<boolean>`c.id > ${watermark}`)
-    .orderBy("c.id")
-    .limit(q.changesLimit);
+    .where("c.telescope_id", "=", telescopeId)
+    .where("c.ends_at", ">", changesSince);
+}
+
+type ChangeJson = Awaited<ReturnType<ReturnType<typeof changesQuery>["execute"]>>[number];
+
+const toChange = (c: ChangeJson): QueueChange => ({
+  id: Number(c.id),
+  kind: c.kind,
+  at: c.at,
+  startsAt: c.starts_at,
+  endsAt: c.ends_at,
+  summary: c.summary,
+  blockId: c.block_id,
+  requestId: c.request_id,
+  targetName: c.target_name || null,
+});
+
+/** The night's snapshot in one round trip (the route is polled every few seconds by every open page). */
+export async function loadNightSnapshot(
+  db: Db | Trx,
+  q: { telescopeId: string; from: Date; to: Date; changesSince: Date; changesCap: number; acknowledgementsLimit: number },
+): Promise<NightSnapshot> {
+  const acknowledgers = db
+    .selectFrom("change_acknowledgements as k")
+    .innerJoin("users as u", "u.id", "k.user_id")
+    .distinctOn("k.user_id")
+    .select([
+      "k.user_id",
+      "u.name",
+      iso("k.at").as("at"),
+      "k.through_change_id",
+      sql<number>`max(k.through_change_id) over (partition by k.user_id)`.as("highest"),
+    ])
+    .where("k.telescope_id", "=", q.telescopeId)
+    .orderBy("k.user_id")
+    .orderBy("k.id", "desc");
 
   const row = await db
     .selectNoFrom([
-      operate.as("operate"),
       jsonArrayFrom(blocksQuery(db, q.telescopeId, q.from, q.to)).as("blocks"),
-      jsonArrayFrom(changes).as("changes"),
+      jsonArrayFrom(changesQuery(db, q.telescopeId, q.changesSince).orderBy("c.id", "desc").limit(q.changesCap)).as("changes"),
+      sql<string[]>`coalesce((select array_agg(ta.user_id::text) from telescope_assistants ta where ta.telescope_id = ${q.telescopeId}), '{}')`.as("assistants"),
+      jsonArrayFrom(acknowledgers).as("acknowledgers"),
       jsonArrayFrom(acknowledgementsQuery(db, q.telescopeId).limit(q.acknowledgementsLimit)).as("recent"),
-      jsonObjectFrom(acknowledgementsQuery(db, q.telescopeId).where("k.user_id", "=", q.userId).limit(1)).as("mine"),
     ])
     .executeTakeFirstOrThrow();
 
+  const total = Number(row.changes[0]?.total ?? 0);
   return {
-    operate: Boolean(row.operate),
     blocks: row.blocks.map(toBlockRow),
-    changes: {
-      total: Number(row.changes[0]?.total ?? 0),
-      items: row.changes.map((c) => ({
-        id: Number(c.id),
-        kind: c.kind,
-        at: c.at,
-        startsAt: c.starts_at,
-        endsAt: c.ends_at,
-        summary: c.summary,
-        blockId: c.block_id,
-        requestId: c.request_id,
-        targetName: c.target_name || null,
-      })),
-    },
+    changes: row.changes.map(toChange).reverse(),
+    changesComplete: row.changes.length >= total,
+    assistantIds: row.assistants,
+    acknowledgers: row.acknowledgers.map((a) => ({ userId: a.user_id, last: toAcknowledgement(a), highest: Number(a.highest) })),
     recent: row.recent.map(toAcknowledgement),
-    mine: row.mine ? toAcknowledgement(row.mine) : null,
   };
+}
+
+/**
+ * The changes after a watermark, oldest first, and how many there are: for the rare night
+ * with more changes than a snapshot carries.
+ */
+export async function loadChangesAfter(
+  db: Db | Trx,
+  q: { telescopeId: string; changesSince: Date; watermark: number; limit: number },
+): Promise<{ items: QueueChange[]; total: number }> {
+  const rows = await changesQuery(db, q.telescopeId, q.changesSince)
+    .where(sql<boolean>`c.id > ${q.watermark}`)
+    .orderBy("c.id")
+    .limit(q.limit)
+    .execute();
+  return { items: rows.map(toChange), total: Number(rows[0]?.total ?? 0) };
 }
 
 export async function findLastAcknowledgement(db: Db | Trx, telescopeId: string, userId: string): Promise<QueueAcknowledgement | undefined> {

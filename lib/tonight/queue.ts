@@ -11,7 +11,9 @@ import { TonightFieldError, TonightNotFoundError } from "./errors";
 import { nightAt, NightNotAtSiteError, tonightOf } from "./night";
 import { onSkyFigures } from "./on-sky";
 import { summarise } from "./summary";
-import { findTelescopeByRef, loadQueueSnapshot, type QueueBlockRow, type QueueTelescopeRow } from "./queries";
+import { nightSnapshot } from "./night-snapshots";
+import { findTelescopeByRef, loadChangesAfter, type QueueBlockRow, type QueueTelescopeRow } from "./queries";
+import { viewOf } from "./viewer-view";
 import type { OnSkyFigures, QueueBlock, QueueNight, QueueTarget, TonightQueue } from "./types";
 
 export interface Viewer {
@@ -20,6 +22,8 @@ export interface Viewer {
 }
 
 const CHANGES_LISTED = 100;
+// A night with more changes than this (never seen) reads the viewer's own from the database.
+const CHANGES_IN_SNAPSHOT = 1000;
 const ACKNOWLEDGEMENTS_LISTED = 10;
 
 function ephemerisOf(rows: NonNullable<QueueBlockRow["too"]>["ephemeris"]): Ephemeris | null {
@@ -102,7 +106,15 @@ async function telescopeFor(db: Db, ref: string, now: number): Promise<QueueTele
   return row;
 }
 
-export async function getTonightQueue(db: Db, viewer: Viewer, telescopeRef: string, nightOf: string | undefined, now = new Date()): Promise<TonightQueue> {
+/** `maxAgeMs`: how old a shared night snapshot may be (the polled route passes a second; pages and tests read fresh). */
+export async function getTonightQueue(
+  db: Db,
+  viewer: Viewer,
+  telescopeRef: string,
+  nightOf: string | undefined,
+  now = new Date(),
+  options: { maxAgeMs?: number } = {},
+): Promise<TonightQueue> {
   const telescope = await telescopeFor(db, telescopeRef, Date.now());
   if (!telescope) throw new TonightNotFoundError(`There is no telescope "${telescopeRef}".`);
   let night: QueueNight;
@@ -113,18 +125,16 @@ export async function getTonightQueue(db: Db, viewer: Viewer, telescopeRef: stri
     throw error;
   }
 
-  const snapshot = await loadQueueSnapshot(db, {
-    telescopeId: telescope.id,
-    userId: viewer.id,
-    isAdmin: viewer.roles.includes("admin"),
-    isNightAssistant: viewer.roles.includes("night_assistant"),
-    from: new Date(night.start),
-    to: new Date(night.end),
-    changesSince: new Date(night.start),
-    changesLimit: CHANGES_LISTED,
-    acknowledgementsLimit: ACKNOWLEDGEMENTS_LISTED,
-  });
-  const { operate, changes } = snapshot;
+  const from = new Date(night.start);
+  const snapshot = await nightSnapshot(
+    db,
+    { telescopeId: telescope.id, from, to: new Date(night.end), changesSince: from, changesCap: CHANGES_IN_SNAPSHOT, acknowledgementsLimit: ACKNOWLEDGEMENTS_LISTED },
+    options.maxAgeMs ?? 0,
+  );
+  const view = viewOf(snapshot, viewer, CHANGES_LISTED);
+  const operate = view.operate;
+  const changes =
+    view.changes ?? (await loadChangesAfter(db, { telescopeId: telescope.id, changesSince: from, watermark: view.watermark, limit: CHANGES_LISTED }));
 
   const changedBlocks = new Set(changes.items.flatMap((c) => (c.blockId ? [c.blockId] : [])));
   const changedRequests = new Set(changes.items.flatMap((c) => (c.requestId ? [c.requestId] : [])));
@@ -177,7 +187,7 @@ export async function getTonightQueue(db: Db, viewer: Viewer, telescopeRef: stri
       more: Math.max(0, changes.total - changes.items.length),
       throughChangeId: changes.items.length ? Math.max(...changes.items.map((c) => c.id)) : null,
     },
-    acknowledgements: { mine: operate ? snapshot.mine : null, recent: snapshot.recent },
+    acknowledgements: { mine: operate ? view.mine : null, recent: snapshot.recent },
     permissions: { canAcknowledge: operate, canLog: operate },
   };
 }

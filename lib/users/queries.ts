@@ -50,6 +50,17 @@ export async function findUserById(db: Db, id: string): Promise<User | undefined
   return row && toUser(row);
 }
 
+/** The user behind a live API token (by the token's hash) and when the token was last used, in one round trip. */
+export async function findUserByTokenHash(db: Db, hash: string): Promise<{ user: User; tokenLastUsedAt: Date | null } | undefined> {
+  const row = await usersWithRoles(db)
+    .innerJoin("api_tokens as t", "t.user_id", "u.id")
+    .select("t.last_used_at")
+    .where("t.token_hash", "=", hash)
+    .where("t.revoked_at", "is", null)
+    .executeTakeFirst();
+  return row && { user: toUser(row), tokenLastUsedAt: row.last_used_at };
+}
+
 export async function listUsers(db: Db): Promise<User[]> {
   const rows = await usersWithRoles(db).orderBy("u.name").execute();
   return rows.map(toUser);

@@ -5,6 +5,7 @@ import { hashPassword } from "@/lib/auth/password";
 import { writeAudit } from "@/lib/audit/queries";
 import { countAdmins, insertUser, replaceUserRoles } from "./queries";
 import type { CreateUserInput } from "./schemas";
+import { forgetTokenUsers } from "@/lib/api-tokens/token-cache";
 
 export class LastAdminError extends Error {
   constructor() {
@@ -29,4 +30,5 @@ export async function setUserRoles(db: Db, actorId: string, userId: string, role
     if ((await countAdmins(trx)) === 0) throw new LastAdminError();
     await writeAudit(trx, { actorUserId: actorId, action: "user.roles", entity: "user", entityId: userId, details: { roles } });
   });
+  forgetTokenUsers();
 }

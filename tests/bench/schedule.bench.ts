@@ -30,13 +30,19 @@ await page.getByLabel("E-mail").fill("observer@nightbreak.test");
 await page.getByLabel("Password").fill("nightbreak-demo");
 await page.getByRole("button", { name: "Sign in" }).click();
 await page.waitForURL(`${base}/`);
-const renders: number[] = [];
-for (let i = 0; i < 5; i++) {
+// A block, not a twilight band (background events are drawn before the data arrives).
+const firstBlock = page.locator(".fc-event:not(.fc-bg-event)").first();
+async function loadCalendar(): Promise<number> {
   const started = performance.now();
   await page.goto(`${base}/schedule`);
-  await page.locator(".fc-event").first().waitFor();
-  renders.push(performance.now() - started);
+  await firstBlock.waitFor();
+  return performance.now() - started;
 }
+// The first load after the app starts also loads the page's server code and fills the
+// browser's cache with the calendar's scripts: printed on its own.
+const cold = await loadCalendar();
+const renders: number[] = [];
+for (let i = 0; i < 5; i++) renders.push(await loadCalendar());
 await browser.close();
 renders.sort((a, b) => a - b);
-console.log(`calendar week view with data (navigation → first block drawn), 5 loads: median ${renders[2]?.toFixed(0)} ms, worst ${renders[4]?.toFixed(0)} ms  [target < 1000 ms]`);
+console.log(`calendar week view with data (navigation → first block drawn): first load after start ${cold.toFixed(0)} ms; then 5 loads: median ${renders[2]?.toFixed(0)} ms, worst ${renders[4]?.toFixed(0)} ms  [target < 1000 ms]`);

@@ -2,6 +2,8 @@ import { describe, expect, it } from "vitest";
 import { POST } from "@/app/api/v1/blocks/route";
 import { DELETE, GET, PATCH } from "@/app/api/v1/blocks/[id]/route";
 import { GET as SCHEDULE } from "@/app/api/v1/schedule/route";
+import { getDb } from "@/db/index";
+import { FINGERPRINT_REUSE_MS } from "@/lib/schedule/schedule-cache";
 import { makeTelescopeAndProgram, makeToken, makeUser } from "./fixtures";
 
 const base = "http://localhost/api/v1";
@@ -88,5 +90,19 @@ describe("the block API", () => {
     expect((moved.body?.blocks as Array<{ startsAt: string }>).map((b) => b.startsAt)).toEqual(["2027-03-05T02:00:00.000Z"]);
     await call(DELETE, token, { url: `${base}/blocks/${id}`, method: "DELETE", params: { id } });
     expect((await call(SCHEDULE, token, { url })).body?.blocks).toEqual([]);
+  });
+
+  it("shows a write made elsewhere (another app instance, straight into the database) within a second", async () => {
+    const admin = await makeUser(["admin"]);
+    const token = await makeToken(admin.id);
+    const { telescopeId, programId } = await makeTelescopeAndProgram();
+    const url = `${base}/schedule?telescope=${telescopeId}&from=2027-03-07T00:00:00Z&to=2027-03-08T00:00:00Z`;
+    expect((await call(SCHEDULE, token, { url })).body?.blocks).toEqual([]);
+    await getDb()
+      .insertInto("blocks")
+      .values({ telescope_id: telescopeId, program_id: programId, kind: "science", starts_at: new Date("2027-03-07T01:00:00Z"), ends_at: new Date("2027-03-07T02:00:00Z") })
+      .execute();
+    await new Promise((resolve) => setTimeout(resolve, FINGERPRINT_REUSE_MS + 50));
+    expect((await call(SCHEDULE, token, { url })).body?.blocks).toHaveLength(1);
   });
 });

@@ -11,6 +11,7 @@ import { parseScheduleFile } from "./parse";
 import { planImport } from "./plan";
 import { insertImportedBlocks } from "./queries";
 import { byLine, type ImportFormat, type ImportPlan, type ImportProblem, type ImportRow } from "./types";
+import { scheduleChanged } from "@/lib/schedule/after-write";
 
 export class ImportRejectedError extends Error {
   constructor(readonly problems: ImportProblem[]) {
@@ -62,6 +63,8 @@ export async function commitImport(db: Db, actorId: string, rows: ImportRow[], s
       );
     }
     throw error;
+  } finally {
+    scheduleChanged();
   }
 }
 

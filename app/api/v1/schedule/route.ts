@@ -1,7 +1,7 @@
 import { getDb } from "@/db/index";
 import { apiRoute } from "@/lib/api/handler";
 import { listCalendarBlocks } from "@/lib/schedule/calendar-queries";
-import { cachedSchedule } from "@/lib/schedule/schedule-cache";
+import { answerResponse, cachedSchedule } from "@/lib/schedule/schedule-cache";
 import { scheduleQuerySchema } from "@/lib/schedule/schemas";
 
 // GET /api/v1/schedule?telescope=&from=&to= — every role may read the schedule.
@@ -10,9 +10,9 @@ export const GET = apiRoute([], async ({ request }) => {
   const query = scheduleQuerySchema.parse(params);
   const db = getDb();
   const key = `${query.telescope ?? "*"}|${query.from.toISOString()}|${query.to.toISOString()}`;
-  const body = await cachedSchedule(db, key, async () => {
+  const answer = await cachedSchedule(db, key, async () => {
     const blocks = await listCalendarBlocks(db, { telescopeId: query.telescope, from: query.from, to: query.to });
     return JSON.stringify({ from: query.from.toISOString(), to: query.to.toISOString(), blocks });
   });
-  return new Response(body, { headers: { "content-type": "application/json", "cache-control": "private, no-cache" } });
+  return answerResponse(answer, { "content-type": "application/json", "cache-control": "private, no-cache" });
 });

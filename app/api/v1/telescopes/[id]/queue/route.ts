@@ -9,7 +9,8 @@ import { queueQuerySchema, telescopeRefSchema } from "@/lib/tonight/schemas";
 export const GET = apiRoute<{ id: string }>(QUEUE_VIEW_ROLES, async ({ request, user, params }) => {
   const ref = telescopeRefSchema.parse(params.id);
   const { night } = queueQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
-  const queue = await getTonightQueue(getDb(), user, ref, night).catch((e: unknown) => {
+  // Every open page polls this: a night snapshot up to a second old is shared between them.
+  const queue = await getTonightQueue(getDb(), user, ref, night, new Date(), { maxAgeMs: 1000 }).catch((e: unknown) => {
     throw toTonightApiError(e);
   });
   return Response.json(queue, { headers: { "cache-control": "no-store" } });
