@@ -19,8 +19,13 @@ const globalForDb = globalThis as unknown as { nightbreakDb?: Db; nightbreakPool
 
 export function createPool(connectionString: string, max = 10): pg.Pool {
   const pool = new pg.Pool({ connectionString, max, connectionTimeoutMillis: 5_000 });
-  // An idle client that loses its server (a restart) must not crash the process.
+  // A client that loses its server (a restart, a failover) must not crash the process.
+  // An idle one reports it through the pool; one checked out between two queries (inside
+  // a transaction, say) reports it on itself, where pg-pool does not listen. Either way
+  // the client is done: its next query fails, and the pool drops it when it comes back.
+  // tests/integration/faults/postgres-restart.test.ts restarts a server under load.
   pool.on("error", () => undefined);
+  pool.on("connect", (client) => client.on("error", () => undefined));
   return pool;
 }
 
