@@ -33,8 +33,30 @@ export function isValidTimeZone(timeZone: string): boolean {
   }
 }
 
+// Offsets per zone and UTC hour. An hour whose two ends have the same offset has that
+// offset throughout (zones change at most once in an hour), so it is kept; an hour with a
+// change in it is answered exactly each time. Intl formatting is the engine's slowest
+// step when a report gives every instant in local time as well.
+const HOUR_MS = 3_600_000;
+const MAX_HOURS_KEPT = 20_000;
+const steadyHours = new Map<string, number>();
+
 /** Offset of local civil time from UTC at an instant, milliseconds (east positive). */
 export function timeZoneOffsetMs(timeZone: string, t: Instant): number {
+  const hour = Math.floor(t / HOUR_MS);
+  const key = `${timeZone}|${hour}`;
+  const steady = steadyHours.get(key);
+  if (steady !== undefined) return steady;
+  const atStart = exactOffsetMs(timeZone, hour * HOUR_MS);
+  if (atStart === exactOffsetMs(timeZone, (hour + 1) * HOUR_MS - 1000)) {
+    if (steadyHours.size >= MAX_HOURS_KEPT) steadyHours.clear();
+    steadyHours.set(key, atStart);
+    return atStart;
+  }
+  return exactOffsetMs(timeZone, t);
+}
+
+function exactOffsetMs(timeZone: string, t: Instant): number {
   const parts = formatter(timeZone).formatToParts(new Date(Math.floor(t / 1000) * 1000));
   const get = (type: string): number => Number(parts.find((p) => p.type === type)?.value ?? 0);
   const asUtc = Date.UTC(get("year"), get("month") - 1, get("day"), get("hour"), get("minute"), get("second"));

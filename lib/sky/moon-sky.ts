@@ -61,11 +61,26 @@ export function moonMargin(
 }
 
 /** First moonrise and moonset within [start, end] (suncalc, upper limb, refracted). */
+// suncalc's rise/set search is the slowest part of a night's report, and the same for
+// every target: keep each site's answer per UT day.
+const moonTimesKept = new Map<string, ReturnType<typeof getMoonTimes>>();
+
+function moonTimesOn(day: number, site: Site): ReturnType<typeof getMoonTimes> {
+  const key = `${site.latitudeDeg}|${site.longitudeDeg}|${day}`;
+  let times = moonTimesKept.get(key);
+  if (!times) {
+    times = getMoonTimes(new Date(day * MS_PER_DAY), site.latitudeDeg, site.longitudeDeg);
+    if (moonTimesKept.size >= 5_000) moonTimesKept.clear();
+    moonTimesKept.set(key, times);
+  }
+  return times;
+}
+
 export function moonRiseSet(site: Site, start: Instant, end: Instant): { rise: Instant | null; set: Instant | null } {
   let rise: Instant | null = null;
   let set: Instant | null = null;
   for (let day = Math.floor(start / MS_PER_DAY); day * MS_PER_DAY <= end; day++) {
-    const times = getMoonTimes(new Date(day * MS_PER_DAY), site.latitudeDeg, site.longitudeDeg);
+    const times = moonTimesOn(day, site);
     const r = times.rise?.getTime();
     const s = times.set?.getTime();
     if (rise === null && r !== undefined && r >= start && r <= end) rise = r;

@@ -3,7 +3,8 @@
 // Lagrange interpolation over equally spaced nodes. Interpolation error: nutation and Sun
 // < 0.01″ (their fastest terms have periods of 9–30 days), Moon ≈ 1″ (its ~13°/day motion
 // is the largest fourth derivative here).
-// A SkyTracks object belongs to one computation; its node cache dies with it.
+// Nodes depend only on the instant, so one SkyTracks can serve every computation in the
+// process (sharedSkyTracks); each track keeps at most MAX_NODES nodes (years of them).
 
 import { type Nutation, nutation } from "./nutation";
 import { moonApparent, moonVectorKm } from "./moon";
@@ -13,6 +14,8 @@ import { unitVector, type Vec3 } from "./vectors";
 
 // Module-local copy of the epoch: this is read on every interpolation.
 const EPOCH = J2000_MS;
+
+const MAX_NODES = 4_000;
 
 export class UniformTrack {
   private readonly cache = new Map<number, Float64Array>();
@@ -28,6 +31,7 @@ export class UniformTrack {
     if (!v) {
       v = new Float64Array(this.dims);
       this.compute(EPOCH + k * this.spacingMs, v);
+      if (this.cache.size >= MAX_NODES) this.cache.clear();
       this.cache.set(k, v);
     }
     return v;
@@ -99,6 +103,14 @@ export class SkyTracks {
   moonAt(t: Instant, out: Float64Array): Float64Array {
     return this.moon.at(t, out);
   }
+}
+
+let shared: SkyTracks | null = null;
+
+/** The process's SkyTracks: the Sun's and Moon's nodes are the same for every target and site. */
+export function sharedSkyTracks(): SkyTracks {
+  shared ??= new SkyTracks();
+  return shared;
 }
 
 export function vec(a: Float64Array): Vec3 {

@@ -15,7 +15,7 @@ import { createNightContext, lastAt, type NightContext } from "./night-context";
 import { nightSpan } from "./nights";
 import type { Site } from "./site";
 import { type Instant, MS_PER_DAY } from "./time-scales";
-import { SkyTracks } from "./tracks";
+import { sharedSkyTracks, type SkyTracks } from "./tracks";
 
 export type Darkness = "civil" | "nautical" | "astronomical";
 
@@ -171,6 +171,6 @@ export function nightEventsFor(ctx: NightContext): NightEvents {
 }
 
 /** Sunset, twilight and sunrise for the night of a local date at a site. */
-export function nightEvents(site: Site, nightOf: string, tracks: SkyTracks = new SkyTracks()): NightEvents {
+export function nightEvents(site: Site, nightOf: string, tracks: SkyTracks = sharedSkyTracks()): NightEvents {
   return nightEventsFor(createNightContext(site, nightSpan(site, nightOf), tracks));
 }

@@ -26,7 +26,7 @@ import { type Site, type SiteGeometry, siteGeometry } from "./site";
 import { minimumOver, sunAvoidanceVerdict, type SunAvoidanceVerdict } from "./sun-avoidance";
 import { type ObservableWindow, ONE_SECOND } from "./target-night";
 import type { Instant } from "./time-scales";
-import { SkyTracks } from "./tracks";
+import { sharedSkyTracks } from "./tracks";
 import { type NightEvents, nightEventsFor, solarMidnight, sunBelow, sunSinAltitude } from "./twilight";
 import type { Vec3 } from "./vectors";
 
@@ -96,7 +96,7 @@ interface Solved {
 
 export class Planner {
   readonly limits: EffectiveLimits;
-  readonly tracks = new SkyTracks();
+  readonly tracks = sharedSkyTracks();
   private readonly geo: SiteGeometry;
   private readonly stepMs: number;
   private readonly moving: MovingTargetSolver;
