@@ -69,7 +69,8 @@ function pad(n: number, width = 2): string {
 
 /** ISO 8601 UTC with whole seconds, e.g. 2025-03-29T21:04:13Z. */
 export function formatUtcIso(t: Instant): string {
-  return new Date(Math.round(t / 1000) * 1000).toISOString().replace(".000Z", "Z");
+  // Whole seconds: the milliseconds are ".000"; slicing them off is cheaper than a replace.
+  return `${new Date(Math.round(t / 1000) * 1000).toISOString().slice(0, 19)}Z`;
 }
 
 /** ISO 8601 local time with offset, e.g. 2025-03-29T22:04:13+01:00. */
