@@ -87,8 +87,9 @@ async function settleRequest(
       loggedAt: logged.loggedAt,
     });
   }
-  // TODO(ledger): a not-executed or partial ToO may change what the ToO program is charged;
-  // the ledger's policy for that belongs in lib/ledger and would be called from here.
+  // The ledger is left as the approval booked it, whatever the outcome: the displaced
+  // programs lost their time either way, and the ToO program was given the night. A
+  // consortium that refunds weather losses would add that rule in lib/ledger, called here.
   return { id: requestId, from: request.state, to };
 }
 
