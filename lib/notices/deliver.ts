@@ -1,7 +1,9 @@
 /**
  * Delivering one queued e-mail. Safe to run twice for the same job (a worker that died
- * mid-send, a job that expired while still running): a sent row is skipped, and the
- * idempotency key makes the mail service answer a repeated send with the first message.
+ * mid-send, a job that expired while still running): a sent row is skipped, the
+ * idempotency key makes the mail service answer a repeated send with the first message,
+ * and when two attempts overlap, the one that finishes last cannot undo a delivery the
+ * other recorded (`recordDelivery`).
  */
 import { z } from "zod";
 import type { Db } from "@/db/index";
@@ -26,6 +28,7 @@ export interface DeliveryJob {
   retryLimit: number;
 }
 
+/** `skipped`: another attempt at the same e-mail had already sent it or given up. */
 export type DeliveryResult = "sent" | "skipped" | "failed";
 
 /** Thrown so that pg-boss schedules a retry with backoff. */
@@ -68,7 +71,8 @@ export async function deliverNoticeJob(job: DeliveryJob, ctx: DeliveryContext): 
     rendered = claimed.rendered ?? (await renderNoticeEmail(notice, { recipientName: data.to.name, appUrl: ctx.appUrl }));
   } catch (error) {
     // A template fault: retried like a send failure, since a fixed deployment can still deliver it.
-    await recordDelivery(ctx.db, data.key, { status: lastAttempt ? "failed" : "retrying", error: `rendering: ${errorText(error)}` }, null);
+    const recorded = await recordDelivery(ctx.db, data.key, { status: lastAttempt ? "failed" : "retrying", error: `rendering: ${errorText(error)}` }, null);
+    if (!recorded) return "skipped"; // another attempt settled it meanwhile
     throw error;
   }
 
@@ -90,11 +94,14 @@ export async function deliverNoticeJob(job: DeliveryJob, ctx: DeliveryContext): 
   }
   if (!outcome.retryable || lastAttempt) {
     // Kept for the log: what was refused.
-    await recordDelivery(ctx.db, data.key, { status: "failed", error: outcome.message }, rendered);
+    const recorded = await recordDelivery(ctx.db, data.key, { status: "failed", error: outcome.message }, rendered);
+    if (!recorded) return "skipped"; // another attempt settled it meanwhile
     if (outcome.retryable) throw new RetryableDeliveryError(`gave up after ${claimed.attempts} attempts: ${outcome.message}`);
     return "failed";
   }
   // Kept so the retry sends these very bytes, even if the templates change in between.
-  await recordDelivery(ctx.db, data.key, { status: "retrying", error: outcome.message }, rendered);
+  const recorded = await recordDelivery(ctx.db, data.key, { status: "retrying", error: outcome.message }, rendered);
+  // Another attempt delivered it (or gave up) meanwhile: there is nothing left to retry.
+  if (!recorded) return "skipped";
   throw new RetryableDeliveryError(outcome.message);
 }

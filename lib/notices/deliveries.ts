@@ -32,8 +32,16 @@ type Outcome =
   | { status: "sent"; providerId: string }
   | { status: "retrying" | "failed"; error: string };
 
-export async function recordDelivery(db: Db, key: string, outcome: Outcome, rendered: RenderedEmail | null): Promise<void> {
-  await db
+/**
+ * Records one attempt's outcome; false when the e-mail was already settled by another.
+ * Two attempts at one e-mail can overlap (pg-boss hands a job out again once it expires,
+ * even while the first attempt is still sending) and finish in either order. A delivery,
+ * once recorded, stands: a late failure from the overtaken attempt must not turn it back
+ * into `retrying` (no job is left to retry it) or `failed`. A late delivery still
+ * replaces a give-up, because the message did arrive.
+ */
+export async function recordDelivery(db: Db, key: string, outcome: Outcome, rendered: RenderedEmail | null): Promise<boolean> {
+  const result = await db
     .updateTable("email_deliveries")
     .set({
       status: outcome.status,
@@ -46,7 +54,9 @@ export async function recordDelivery(db: Db, key: string, outcome: Outcome, rend
       body_text: sql`coalesce(body_text, ${rendered?.text ?? null})`,
     })
     .where("idempotency_key", "=", key)
-    .execute();
+    .where("status", "not in", outcome.status === "sent" ? ["sent"] : ["sent", "failed"])
+    .executeTakeFirst();
+  return result.numUpdatedRows > 0n;
 }
 
 export interface DeliveryLogEntry {

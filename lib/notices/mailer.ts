@@ -1,9 +1,10 @@
 /**
  * Sending one e-mail through the Resend SDK. The SDK never throws on HTTP errors: it
  * resolves to `{ error }` with `statusCode` (null for a network failure). We sort those
- * into retryable (network, timeout, 408, 429, 5xx: the queue tries again later) and
- * permanent (any other 4xx: retrying cannot help). The client is created on first use,
- * never at import, because the constructor throws without an API key.
+ * into retryable (network, timeout, 408, 429, 5xx, and the 409 for a concurrent request
+ * with the same idempotency key: the queue tries again later) and permanent (any other
+ * 4xx: retrying cannot help). The client is created on first use, never at import,
+ * because the constructor throws without an API key.
  */
 import { Resend } from "resend";
 
@@ -27,7 +28,10 @@ export interface Mailer {
 
 export function classifySendError(error: { statusCode?: number | null; name?: string; message?: string }): Extract<SendOutcome, { ok: false }> {
   const status = typeof error.statusCode === "number" ? error.statusCode : null;
-  const retryable = status === null || status === 408 || status === 429 || status >= 500;
+  // 409 concurrent_idempotent_requests: the same key is still in flight from an attempt
+  // that overlaps this one (a job handed out again after it expired). Not a refusal:
+  // trying again later gets the first request's answer.
+  const retryable = status === null || status === 408 || status === 429 || status >= 500 || error.name === "concurrent_idempotent_requests";
   const message = `${status ?? "network"} ${error.name ?? "error"}: ${error.message ?? "no message"}`.slice(0, 1000);
   return { ok: false, retryable, status, message };
 }

@@ -25,7 +25,7 @@ import { startNoticeWorker, type NoticeWorker } from "@/lib/notices/worker";
 import { startEmailFake, type EmailFake } from "../../../scripts/fakes/email-server";
 import { blockDisplaced, decisionMade, paybackScheduled } from "../../support/notice-payloads";
 import { makeUser } from "../fixtures";
-import { API_KEY, APP_URL, clearNoticeBacklog, countByKey, deliveryStatuses, TEST_POLICY, waitUntilSettled } from "../notices/helpers";
+import { API_KEY, APP_URL, clearNoticeBacklog, countByKey, deliveryStatuses, SETTLE_TIMEOUT_MS, TEST_POLICY, waitFor, waitUntilSettled } from "../notices/helpers";
 
 // A retry a second apart, and plenty of them: the outage must not use them all up.
 const OUTAGE_POLICY: DeliveryPolicy = { ...TEST_POLICY, retryLimit: 60, retryDelaySeconds: 1, retryBackoff: false };
@@ -60,14 +60,6 @@ afterAll(async () => {
 async function jobStates(keys: readonly string[]): Promise<string[]> {
   const { rows } = await sql<{ state: string }>`select state::text from pgboss.job where data->>'key' in (${sql.join([...keys])})`.execute(getDb());
   return rows.map((r) => r.state);
-}
-
-async function waitFor(what: string, check: () => Promise<boolean>, timeoutMs = 45_000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (!(await check())) {
-    if (Date.now() > deadline) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
 }
 
 describe("the mail service down while notices are caused", () => {
@@ -119,7 +111,7 @@ describe("the mail service down while notices are caused", () => {
 
     // Back, on the same address, with the same storage: the same worker catches up.
     fake = await startEmailFake({ port, dir, faults: { failRate: 0 } });
-    const settled = await waitUntilSettled(keys, 60_000);
+    const settled = await waitUntilSettled(keys);
     expect([...settled.values()].filter((s) => s.status !== "sent")).toEqual([]);
     expect([...settled.values()].every((s) => s.attempts >= 3)).toBe(true);
 
@@ -127,6 +119,6 @@ describe("the mail service down while notices are caused", () => {
     const perKey = countByKey(messages.data, keys);
     expect(perKey.size).toBe(9);
     expect([...perKey.values()].filter((n) => n !== 1)).toEqual([]);
-    await waitFor("pg-boss to record every job completed", async () => (await jobStates(keys)).every((s) => s === "completed"), 20_000);
-  }, 120_000);
+    await waitFor("pg-boss to record every job completed", async () => (await jobStates(keys)).every((s) => s === "completed"));
+  }, 3 * SETTLE_TIMEOUT_MS + 30_000);
 });

@@ -7,8 +7,7 @@ import { noticeBlockDisplaced } from "@/lib/notices/notify";
 import { closeNoticeQueue } from "@/lib/notices/queue";
 import type { NoticeWorker } from "@/lib/notices/worker";
 import { blockDisplaced } from "../../support/notice-payloads";
-import { makeUser } from "../fixtures";
-import { clearNoticeBacklog, countByKey, startTestFake, startTestWorker, waitUntilSettled, type TestFake } from "./helpers";
+import { clearNoticeBacklog, countByKey, makeUsers, SETTLE_TIMEOUT_MS, startTestFake, startTestWorker, waitUntilSettled, type TestFake } from "./helpers";
 
 let fake: TestFake;
 let worker: NoticeWorker;
@@ -27,7 +26,7 @@ afterAll(async () => {
 
 describe("a burst of notices against a failing mail service", () => {
   it("delivers each of 200 e-mails exactly once", async () => {
-    const observers = await Promise.all(Array.from({ length: 40 }, () => makeUser(["observer"])));
+    const observers = await makeUsers(40, ["observer"]);
     const payloads = observers.flatMap((o) => Array.from({ length: 5 }, () => blockDisplaced({ observerUserId: o.id })));
     // Twenty "splices" at once, ten displacements each.
     await Promise.all(
@@ -42,7 +41,7 @@ describe("a burst of notices against a failing mail service", () => {
     const keys = payloads.map((p) => noticeKey("block_displaced", p.displacementId, p.observerUserId));
     expect(new Set(keys).size).toBe(200);
 
-    const statuses = await waitUntilSettled(keys, 140_000);
+    const statuses = await waitUntilSettled(keys, 2 * SETTLE_TIMEOUT_MS);
     expect([...statuses.values()].filter((s) => s.status !== "sent")).toEqual([]);
 
     const counts = countByKey(await fake.messages(), keys);
@@ -55,5 +54,5 @@ describe("a burst of notices against a failing mail service", () => {
     expect(stats.idempotentReplays).toBeGreaterThan(0);
     const attempts = [...statuses.values()].reduce((sum, s) => sum + s.attempts, 0);
     expect(attempts).toBeGreaterThan(200);
-  }, 150_000);
+  }, 3 * SETTLE_TIMEOUT_MS);
 });

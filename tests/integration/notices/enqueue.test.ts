@@ -12,7 +12,7 @@ import type { NoticeWorker } from "@/lib/notices/worker";
 import { Resend } from "resend";
 import { blockDisplaced, decisionMade, requestSubmitted, tonightChanged } from "../../support/notice-payloads";
 import { makeTelescopeAndProgram, makeUser } from "../fixtures";
-import { API_KEY, APP_URL, clearNoticeBacklog, countByKey, startTestFake, startTestWorker, waitUntilSettled, type TestFake } from "./helpers";
+import { API_KEY, APP_URL, clearNoticeBacklog, countByKey, SETTLE_TIMEOUT_MS, startTestFake, startTestWorker, waitUntilSettled, type TestFake } from "./helpers";
 
 let fake: TestFake;
 let worker: NoticeWorker;
@@ -34,7 +34,8 @@ async function jobsWithKey(key: string): Promise<number> {
   return Number(rows[0]?.n ?? 0);
 }
 
-describe("enqueueing notices", () => {
+// Several tests wait for the worker to deliver: give them longer than that wait may take.
+describe("enqueueing notices", { timeout: SETTLE_TIMEOUT_MS + 30_000 }, () => {
   it("tells every director in-app, e-mails those who want it, and links to the review", async () => {
     const [a, b, quiet] = await Promise.all([makeUser(["director"]), makeUser(["director"]), makeUser(["director"])]);
     await setEmailPreferences(getDb(), quiet.id, { request_submitted: false });

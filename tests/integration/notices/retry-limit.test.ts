@@ -9,7 +9,7 @@ import { closeNoticeQueue } from "@/lib/notices/queue";
 import type { NoticeWorker } from "@/lib/notices/worker";
 import { decisionMade } from "../../support/notice-payloads";
 import { makeUser } from "../fixtures";
-import { clearNoticeBacklog, startTestFake, startTestWorker, TEST_POLICY, waitUntilSettled, type TestFake } from "./helpers";
+import { clearNoticeBacklog, SETTLE_TIMEOUT_MS, startTestFake, startTestWorker, TEST_POLICY, waitFor, waitUntilSettled, type TestFake } from "./helpers";
 
 let fake: TestFake;
 let worker: NoticeWorker;
@@ -40,14 +40,10 @@ describe("a mail service that never recovers", () => {
     expect(row.subject).toMatch(/was approved$/);
     expect(row.sent_at).toBeNull();
 
-    // pg-boss agrees: the job ended failed, not completed.
-    for (let i = 0; i < 50; i += 1) {
-      const { rows } = await sql<{ state: string }>`select state::text from pgboss.job where data->>'key' = ${key}`.execute(getDb());
-      if (rows[0]?.state === "failed") break;
-      await new Promise((r) => setTimeout(r, 100));
-    }
-    const { rows } = await sql<{ state: string }>`select state::text from pgboss.job where data->>'key' = ${key}`.execute(getDb());
-    expect(rows.map((r) => r.state)).toEqual(["failed"]);
+    // pg-boss agrees: the job ended failed, not completed (it hears so just after the row is written).
+    const jobStates = async () => (await sql<{ state: string }>`select state::text from pgboss.job where data->>'key' = ${key}`.execute(getDb())).rows.map((r) => r.state);
+    await waitFor("pg-boss to end the job", async () => (await jobStates()).every((s) => !["created", "retry", "active"].includes(s)));
+    expect(await jobStates()).toEqual(["failed"]);
     expect((await fake.messages()).filter((m) => m.idempotency_key === key)).toEqual([]);
-  });
+  }, 2 * SETTLE_TIMEOUT_MS + 30_000);
 });

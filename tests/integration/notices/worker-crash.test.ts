@@ -7,8 +7,10 @@ import { noticeKey } from "@/lib/notices/enqueue";
 import { noticePaybackScheduled } from "@/lib/notices/notify";
 import { closeNoticeQueue } from "@/lib/notices/queue";
 import { paybackScheduled } from "../../support/notice-payloads";
-import { makeUser } from "../fixtures";
-import { API_KEY, APP_URL, clearNoticeBacklog, countByKey, deliveryStatuses, policyEnv, startTestFake, TEST_POLICY, waitUntilSettled, type TestFake } from "./helpers";
+import { API_KEY, APP_URL, clearNoticeBacklog, countByKey, deliveryStatuses, makeUsers, policyEnv, SETTLE_TIMEOUT_MS, startTestFake, TEST_POLICY, waitFor, waitUntilSettled, type TestFake } from "./helpers";
+
+// Starting a worker (node, tsx, React, pg-boss) takes a second or two, far longer under load.
+const START_TIMEOUT_MS = 60_000;
 
 let fake: TestFake;
 const children: ChildProcess[] = [];
@@ -41,6 +43,7 @@ function spawnWorker(): { child: ChildProcess; output: () => string; ready: Prom
     });
     child.stderr?.on("data", (chunk: Buffer) => (output += chunk.toString()));
     child.once("exit", (code, signal) => reject(new Error(`worker exited (${code ?? signal}) before it was ready:\n${output}`)));
+    setTimeout(() => reject(new Error(`worker not ready after ${START_TIMEOUT_MS / 1000} s:\n${output}`)), START_TIMEOUT_MS).unref();
   });
   return { child, output: () => output, ready };
 }
@@ -51,7 +54,7 @@ function exited(child: ChildProcess): Promise<void> {
 
 describe("a worker killed mid-burst", () => {
   it("loses nothing: the next worker delivers every e-mail exactly once", async () => {
-    const observers = await Promise.all(Array.from({ length: 30 }, () => makeUser(["observer"])));
+    const observers = await makeUsers(30, ["observer"]);
     const payloads = observers.flatMap((o) => Array.from({ length: 4 }, () => paybackScheduled({ observerUserId: o.id })));
     await getDb()
       .transaction()
@@ -63,11 +66,16 @@ describe("a worker killed mid-burst", () => {
     const first = spawnWorker();
     await first.ready;
     let sentAtKill = 0;
-    for (;;) {
-      sentAtKill = [...(await deliveryStatuses(keys)).values()].filter((s) => s.status === "sent").length;
-      if (sentAtKill >= 10) break;
-      await new Promise((r) => setTimeout(r, 25));
-    }
+    await waitFor(
+      "the first worker to send 10 e-mails",
+      async () => {
+        if (first.child.exitCode !== null || first.child.signalCode !== null) throw new Error(`the first worker ended early:\n${first.output()}`);
+        sentAtKill = [...(await deliveryStatuses(keys)).values()].filter((s) => s.status === "sent").length;
+        return sentAtKill >= 10;
+      },
+      SETTLE_TIMEOUT_MS,
+      25,
+    );
     first.child.kill("SIGKILL");
     await exited(first.child);
     expect(first.child.signalCode).toBe("SIGKILL");
@@ -75,7 +83,8 @@ describe("a worker killed mid-burst", () => {
 
     const second = spawnWorker();
     await second.ready;
-    const statuses = await waitUntilSettled(keys, 120_000);
+    // Waits on the real condition; the bound is only there to fail with the stuck e-mails' story.
+    const statuses = await waitUntilSettled(keys, 2 * SETTLE_TIMEOUT_MS);
     second.child.kill("SIGTERM");
     await exited(second.child);
 
@@ -85,5 +94,5 @@ describe("a worker killed mid-burst", () => {
     expect([...counts.values()].filter((n) => n !== 1)).toEqual([]);
     expect((await fake.stats()).injectedFailures).toBeGreaterThan(0);
     expect(second.child.exitCode).toBe(0);
-  }, 180_000);
+  }, 2 * START_TIMEOUT_MS + 3 * SETTLE_TIMEOUT_MS + 30_000);
 });
