@@ -6,12 +6,13 @@
  * the change holds within TOKEN_REUSE_MS. Unknown and revoked tokens are never kept.
  */
 import type { Db } from "@/db/index";
+import { processShared } from "@/lib/process-shared";
 import type { User } from "@/lib/users/queries";
 import { findUserByToken, hashToken } from "./queries";
 
 export const TOKEN_REUSE_MS = 1000;
 const MAX_ENTRIES = 1000;
-const entries = new Map<string, { at: number; user: User }>();
+const entries = processShared("token-users", () => new Map<string, { at: number; user: User }>());
 
 export async function userByTokenReused(db: Db, token: string, now = Date.now()): Promise<User | undefined> {
   const key = hashToken(token);

@@ -9,6 +9,7 @@
  */
 import { sql } from "kysely";
 import type { Db } from "@/db/index";
+import { processShared } from "@/lib/process-shared";
 
 /** One answer, encoded to UTF-8 once (a semester is ~680 KB of JSON). */
 export interface CachedAnswer {
@@ -16,7 +17,12 @@ export interface CachedAnswer {
 }
 
 const MAX_ENTRIES = 64;
-const cache = new Map<string, CachedAnswer>();
+const state = processShared("schedule-answers", () => ({
+  answers: new Map<string, CachedAnswer>(),
+  checked: null as { at: number; fingerprint: string } | null,
+  generation: 0,
+}));
+const cache = state.answers;
 
 function answerOf(body: string): CachedAnswer {
   return { bytes: Buffer.from(body, "utf8") };
@@ -33,22 +39,21 @@ export async function scheduleFingerprint(db: Db): Promise<string> {
 // forgets it at once (scheduleChanged in after-write.ts); one through another app instance
 // shows within FINGERPRINT_REUSE_MS (the calendar refreshes every 30 s in any case).
 export const FINGERPRINT_REUSE_MS = 1000;
-let checked: { at: number; fingerprint: string } | null = null;
-let generation = 0;
 
 async function currentFingerprint(db: Db): Promise<string> {
   const now = Date.now();
+  const { checked } = state;
   if (checked && now - checked.at <= FINGERPRINT_REUSE_MS) return checked.fingerprint;
-  const startedIn = generation;
+  const startedIn = state.generation;
   const fingerprint = await scheduleFingerprint(db);
-  if (generation === startedIn) checked = { at: now, fingerprint };
+  if (state.generation === startedIn) state.checked = { at: now, fingerprint };
   return fingerprint;
 }
 
 /** After a write to the blocks: the next answer asks the database. */
 export function forgetScheduleFingerprint(): void {
-  generation++;
-  checked = null;
+  state.generation++;
+  state.checked = null;
 }
 
 /** The cached answer for this key and fingerprint, or a fresh one from `build`. */

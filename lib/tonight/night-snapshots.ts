@@ -7,13 +7,14 @@
  * instance shows up within `maxAgeMs`. Concurrent misses share one load.
  */
 import type { Db } from "@/db/index";
+import { processShared } from "@/lib/process-shared";
 import { loadNightSnapshot, type NightSnapshot } from "./queries";
 
 type Query = Parameters<typeof loadNightSnapshot>[1];
 
 const MAX_ENTRIES = 64;
-const entries = new Map<string, { at: number; snapshot: Promise<NightSnapshot> }>();
-let generation = 0;
+const state = processShared("night-snapshots", () => ({ entries: new Map<string, { at: number; snapshot: Promise<NightSnapshot> }>(), generation: 0 }));
+const { entries } = state;
 
 export async function nightSnapshot(db: Db, q: Query, maxAgeMs: number): Promise<NightSnapshot> {
   if (maxAgeMs <= 0) return loadNightSnapshot(db, q);
@@ -22,7 +23,7 @@ export async function nightSnapshot(db: Db, q: Query, maxAgeMs: number): Promise
   const hit = entries.get(key);
   if (hit && now - hit.at <= maxAgeMs) return hit.snapshot;
 
-  const startedIn = generation;
+  const startedIn = state.generation;
   const snapshot = loadNightSnapshot(db, q);
   if (entries.size >= MAX_ENTRIES) entries.delete(entries.keys().next().value ?? "");
   entries.set(key, { at: now, snapshot });
@@ -33,12 +34,12 @@ export async function nightSnapshot(db: Db, q: Query, maxAgeMs: number): Promise
     throw error;
   } finally {
     // A write committed while this load ran may be missing from it: do not keep it.
-    if (generation !== startedIn && entries.get(key)?.snapshot === snapshot) entries.delete(key);
+    if (state.generation !== startedIn && entries.get(key)?.snapshot === snapshot) entries.delete(key);
   }
 }
 
 /** After a write that changes a queue: the next poll reads the database. */
 export function forgetNightSnapshots(): void {
-  generation++;
+  state.generation++;
   entries.clear();
 }

@@ -5,6 +5,7 @@
  * service.ts), so the check that decides never uses a limit older than that.
  */
 import type { Db } from "@/db/index";
+import { processShared } from "@/lib/process-shared";
 import { type InstrumentOption, listInstrumentOptions, listTelescopesForSky } from "../reference-queries";
 import type { TelescopeSky } from "./types";
 
@@ -15,7 +16,7 @@ interface Reference {
   instruments: Map<string, InstrumentOption>;
 }
 
-let kept: { at: number; reference: Promise<Reference> } | null = null;
+const state = processShared("preview-reference", () => ({ kept: null as { at: number; reference: Promise<Reference> } | null }));
 
 async function load(db: Db): Promise<Reference> {
   const [telescopes, instruments] = await Promise.all([listTelescopesForSky(db), listInstrumentOptions(db)]);
@@ -40,12 +41,12 @@ export async function previewReference(
 }
 
 function keptReference(db: Db, now: number, fresh: boolean): Promise<Reference> {
-  if (fresh || !kept || now - kept.at > REFERENCE_REUSE_MS) {
+  if (fresh || !state.kept || now - state.kept.at > REFERENCE_REUSE_MS) {
     const reference = load(db);
-    kept = { at: now, reference };
+    state.kept = { at: now, reference };
     reference.catch(() => {
-      if (kept?.reference === reference) kept = null;
+      if (state.kept?.reference === reference) state.kept = null;
     });
   }
-  return kept.reference;
+  return state.kept.reference;
 }
