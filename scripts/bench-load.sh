@@ -11,19 +11,8 @@ export PG_ADMIN_URL
 ensure_secret
 TSX="$ROOT/node_modules/.bin/tsx"
 
-ensure_database nightbreak_bench_load fresh
-export DATABASE_URL
-DATABASE_URL=$(db_url nightbreak_bench_load)
-"$TSX" scripts/migrate.ts >/dev/null
-"$TSX" scripts/seed.ts >/dev/null
-if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib db -newer .next/BUILD_ID -type f | head -n 1)" ]; then
-  log "building the app"
-  npx next build > "$DATA_DIR/build.log" 2>&1 || die "next build failed (.data/build.log)"
-fi
-mkdir -p "$DATA_DIR/bench-load"
 source "$ROOT/scripts/services.sh"
-start_services "$(free_port 3300)" "$DATA_DIR/bench-load"
-export BENCH_BASE_URL="$APP_URL"
+start_bench_app nightbreak_bench_load "$DATA_DIR/bench-load"
 BENCH_TOKEN=$("$TSX" tests/bench/bench-token.ts admin@nightbreak.test)
 BENCH_PI_TOKEN=$("$TSX" tests/bench/bench-token.ts pi@nightbreak.test)
 BENCH_DIRECTOR_TOKEN=$("$TSX" tests/bench/bench-token.ts director@nightbreak.test)

@@ -16,19 +16,8 @@ for bench in tests/bench/*.bench.ts; do
   "$TSX" "$bench" || log "$bench failed"
 done
 
-ensure_database nightbreak_bench fresh
-export DATABASE_URL
-DATABASE_URL=$(db_url nightbreak_bench)
-"$TSX" scripts/migrate.ts >/dev/null
-"$TSX" scripts/seed.ts >/dev/null
-if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib db -newer .next/BUILD_ID -type f | head -n 1)" ]; then
-  log "building the app"
-  npx next build > "$DATA_DIR/build.log" 2>&1 || die "next build failed (.data/build.log)"
-fi
-mkdir -p "$DATA_DIR/bench"
 source "$ROOT/scripts/services.sh"
-start_services "$(free_port 3200)" "$DATA_DIR/bench"
-export BENCH_BASE_URL="$APP_URL"
+start_bench_app nightbreak_bench "$DATA_DIR/bench"
 BENCH_TOKEN=$("$TSX" tests/bench/bench-token.ts admin@nightbreak.test)
 export BENCH_TOKEN
 for bench in tests/bench/schedule.bench.ts tests/bench/http*.bench.ts; do

@@ -48,3 +48,22 @@ stop_services() {
   done
   SERVICE_PIDS=()
 }
+
+# start_bench_app DBNAME LOGDIR: a freshly seeded database of its own, a production build
+# (rebuilt when any source or config is newer than it) and the app and fakes started on
+# it; exports DATABASE_URL and BENCH_BASE_URL. For scripts/bench.sh and bench-load.sh.
+start_bench_app() {
+  local db=$1 logs=$2 tsx="$ROOT/node_modules/.bin/tsx"
+  ensure_database "$db" fresh
+  export DATABASE_URL
+  DATABASE_URL=$(db_url "$db")
+  "$tsx" scripts/migrate.ts >/dev/null
+  "$tsx" scripts/seed.ts >/dev/null
+  if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib db emails next.config.mjs tailwind.config.ts -newer .next/BUILD_ID -type f | head -n 1)" ]; then
+    log "building the app"
+    npx next build > "$DATA_DIR/build.log" 2>&1 || die "next build failed (.data/build.log)"
+  fi
+  mkdir -p "$logs"
+  start_services "$(free_port 3300)" "$logs"
+  export BENCH_BASE_URL="$APP_URL"
+}
