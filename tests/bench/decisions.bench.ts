@@ -9,7 +9,7 @@
  *
  * Needs PG_ADMIN_URL (scripts/lib.sh `pg_start` exports it); makes and drops a database.
  */
-import pg from "pg";
+import { percentile, throwawayDatabase } from "./bench-support";
 
 const APPROVALS = 99;
 const CONCURRENT = 50;
@@ -17,34 +17,15 @@ const RUNS = 12;
 const HOUR = 3_600_000;
 const MINUTE = 60_000;
 
-function percentile(sorted: number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))] ?? NaN;
-}
 const ms = (x: number) => `${x.toFixed(1)} ms`;
 function describeTimes(times: number[]): string {
   const s = [...times].sort((a, b) => a - b);
   return `p50 ${ms(percentile(s, 50))}, p95 ${ms(percentile(s, 95))}, max ${ms(s.at(-1) ?? NaN)}`;
 }
 
-async function admin(url: string, query: string): Promise<void> {
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    await client.query(query);
-  } finally {
-    await client.end();
-  }
-}
-
 async function main(): Promise<void> {
-  const adminUrl = process.env.PG_ADMIN_URL;
-  if (!adminUrl) throw new Error("PG_ADMIN_URL is not set: `source scripts/lib.sh && pg_start && export PG_ADMIN_URL` first");
-  const dbName = `nightbreak_bench_decisions_${process.pid}`;
-  await admin(adminUrl, `DROP DATABASE IF EXISTS ${dbName} WITH (FORCE)`);
-  await admin(adminUrl, `CREATE DATABASE ${dbName}`);
-  const url = new URL(adminUrl);
-  url.pathname = `/${dbName}`;
-  process.env.DATABASE_URL = url.toString();
+  const database = await throwawayDatabase("nightbreak_bench_decisions");
+  const url = database.url;
 
   const { createDb, getDb } = await import("../../db/index");
   const { migrateToLatest } = await import("../../db/migrate");
@@ -61,7 +42,7 @@ async function main(): Promise<void> {
   const { listImpactBlocks } = await import("../../lib/impact/queries");
   const { findUserById } = await import("../../lib/users/queries");
 
-  const setup = createDb(url.toString(), 1);
+  const setup = createDb(url, 1);
   await migrateToLatest(setup);
   const seeded = await seedDemo(setup, { passwordHash: "-" });
   await setup.destroy();
@@ -213,7 +194,7 @@ async function main(): Promise<void> {
   } finally {
     await closeNoticeQueue();
     await getDb().destroy();
-    await admin(adminUrl, `DROP DATABASE IF EXISTS ${dbName} WITH (FORCE)`);
+    await database.drop();
   }
 }
 

@@ -18,6 +18,7 @@ import { computeFeasibility } from "../../lib/requests/feasibility/compute";
 import type { InstrumentRef, TelescopeSky } from "../../lib/requests/feasibility/types";
 import { feasibilityInputSchema } from "../../lib/requests/schemas";
 import { computeVisibility, type VisibilityRequest, visibilityRequestSchema } from "../../lib/visibility";
+import { percentile } from "./bench-support";
 
 const CALLERS = 16;
 const ROUNDS = 12; // answers per caller
@@ -77,10 +78,6 @@ function previewInput(call: number, moving: boolean, edit = 0) {
     deadline: new Date(NOW.getTime() + (72 - (edit % 7)) * HOUR).toISOString(),
     constraints: { darkness: "nautical", maxAirmass: 2 },
   });
-}
-
-function percentile(sorted: number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? NaN;
 }
 
 const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));

@@ -3,6 +3,7 @@
  * benchmarks can print exact percentiles (autocannon's own summary has no p95).
  */
 import autocannon from "autocannon";
+import { percentile } from "./bench-support";
 
 export interface LoadResult {
   requests: number;
@@ -13,11 +14,6 @@ export interface LoadResult {
   p95: number;
   p99: number;
   max: number;
-}
-
-function percentile(sorted: number[], p: number): number {
-  if (!sorted.length) return NaN;
-  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? NaN;
 }
 
 export async function runLoad(options: {

@@ -13,7 +13,7 @@
 import { mkdtemp, rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import pg from "pg";
+import { percentile, throwawayDatabase } from "./bench-support";
 
 // React's production build, as under `next start`; set before anything imports React.
 Object.assign(process.env, { NODE_ENV: "production" });
@@ -22,31 +22,12 @@ const TOTAL = 500;
 const PER_TRANSACTION = 10;
 const PARALLEL_TRANSACTIONS = 10;
 
-function percentile(sorted: number[], p: number): number {
-  return sorted[Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1))] ?? NaN;
-}
 
 const seconds = (ms: number) => `${(ms / 1000).toFixed(2)} s`;
 
-async function admin(url: string, query: string): Promise<void> {
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    await client.query(query);
-  } finally {
-    await client.end();
-  }
-}
-
 async function main(): Promise<void> {
-  const adminUrl = process.env.PG_ADMIN_URL;
-  if (!adminUrl) throw new Error("PG_ADMIN_URL is not set: `source scripts/lib.sh && pg_start && export PG_ADMIN_URL` first");
-  const dbName = `nightbreak_bench_${process.pid}`;
-  await admin(adminUrl, `DROP DATABASE IF EXISTS ${dbName} WITH (FORCE)`);
-  await admin(adminUrl, `CREATE DATABASE ${dbName}`);
-  const url = new URL(adminUrl);
-  url.pathname = `/${dbName}`;
-  process.env.DATABASE_URL = url.toString();
+  const database = await throwawayDatabase("nightbreak_bench");
+  const url = database.url;
 
   const { createDb, getDb } = await import("../../db/index");
   const { migrateToLatest } = await import("../../db/migrate");
@@ -59,7 +40,7 @@ async function main(): Promise<void> {
   const { startNoticeWorker } = await import("../../lib/notices/worker");
   const { blockDisplaced } = await import("../support/notice-payloads");
 
-  const migrator = createDb(url.toString(), 1);
+  const migrator = createDb(url, 1);
   await migrateToLatest(migrator);
   await migrator.destroy();
 
@@ -129,7 +110,7 @@ async function main(): Promise<void> {
     await getDb().destroy();
     await fake.close();
     await rm(dir, { recursive: true, force: true });
-    await admin(adminUrl, `DROP DATABASE IF EXISTS ${dbName} WITH (FORCE)`);
+    await database.drop();
   }
 }
 
