@@ -35,6 +35,22 @@ export async function makeToken(userId: string, opts: { revoked?: boolean } = {}
   return token;
 }
 
+/** A partner, a 2027 first-half semester and a science program (code `PRG<code>`) led by `piId`. */
+export async function makeProgram(code: string, piId: string, opts: { tooAllowed?: boolean } = {}): Promise<{ id: string }> {
+  const db = getDb();
+  const partner = await db.insertInto("partners").values({ code: `P${code}`, name: `Partner ${code}` }).returning("id").executeTakeFirstOrThrow();
+  const semester = await db
+    .insertInto("semesters")
+    .values({ code: `SEM${code}`, starts_at: new Date("2027-01-01T00:00:00Z"), ends_at: new Date("2027-07-01T00:00:00Z") })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+  return db
+    .insertInto("programs")
+    .values({ code: `PRG${code}`, title: "Fixture program", semester_id: semester.id, partner_id: partner.id, pi_user_id: piId, rank: 2, allocated_hours: 10, category: "science", ...(opts.tooAllowed ? { too_allowed: true } : {}) })
+    .returning("id")
+    .executeTakeFirstOrThrow();
+}
+
 export async function makeTelescopeAndProgram() {
   const db = getDb();
   const code = unique();
@@ -49,16 +65,6 @@ export async function makeTelescopeAndProgram() {
     .values({ site_id: site.id, code: `T${code}`, name: `Scope ${code}`, aperture_m: 2, min_altitude_deg: 20, max_airmass: 2.5, sun_avoidance_deg: 40, hour_angle_min_h: -6, hour_angle_max_h: 6 })
     .returning("id")
     .executeTakeFirstOrThrow();
-  const partner = await db.insertInto("partners").values({ code: `P${code}`, name: `Partner ${code}` }).returning("id").executeTakeFirstOrThrow();
-  const semester = await db
-    .insertInto("semesters")
-    .values({ code: `SEM${code}`, starts_at: new Date("2027-01-01T00:00:00Z"), ends_at: new Date("2027-07-01T00:00:00Z") })
-    .returning("id")
-    .executeTakeFirstOrThrow();
-  const program = await db
-    .insertInto("programs")
-    .values({ code: `PRG${code}`, title: "Fixture program", semester_id: semester.id, partner_id: partner.id, pi_user_id: pi.id, rank: 2, allocated_hours: 10, category: "science" })
-    .returning("id")
-    .executeTakeFirstOrThrow();
+  const program = await makeProgram(code, pi.id);
   return { siteId: site.id, telescopeId: telescope.id, programId: program.id, piId: pi.id };
 }

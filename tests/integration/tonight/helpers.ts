@@ -6,7 +6,7 @@
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db/index";
 import type { BlockKind, ExecutionOutcome, ScheduleChangeKind } from "@/db/types";
-import { makeToken, makeUser } from "../fixtures";
+import { makeProgram, makeToken, makeUser } from "../fixtures";
 
 const unique = () => randomUUID().slice(0, 8);
 
@@ -40,17 +40,7 @@ export async function makeNightDesk(spec: SiteSpec) {
     .values({ telescope_id: telescope.id, code: `I${code}`, name: `Imager ${code}`, limiting_magnitude: 22 })
     .returning("id")
     .executeTakeFirstOrThrow();
-  const partner = await db.insertInto("partners").values({ code: `P${code}`, name: `Partner ${code}` }).returning("id").executeTakeFirstOrThrow();
-  const semester = await db
-    .insertInto("semesters")
-    .values({ code: `SEM${code}`, starts_at: new Date("2027-01-01T00:00:00Z"), ends_at: new Date("2027-07-01T00:00:00Z") })
-    .returning("id")
-    .executeTakeFirstOrThrow();
-  const program = await db
-    .insertInto("programs")
-    .values({ code: `PRG${code}`, title: "Fixture program", semester_id: semester.id, partner_id: partner.id, pi_user_id: pi.id, rank: 2, allocated_hours: 10, category: "science", too_allowed: true })
-    .returning("id")
-    .executeTakeFirstOrThrow();
+  const program = await makeProgram(code, pi.id, { tooAllowed: true });
   return {
     siteId: site.id,
     telescopeId: telescope.id,
