@@ -24,16 +24,11 @@ export interface ImpactBlock {
   observerEmail: string | null;
 }
 
-export interface DisplacedBlock {
+/** Whose block it is: everything of an ImpactBlock but its id and times. */
+export type BlockOwner = Omit<ImpactBlock, "id" | "start" | "end">;
+
+export interface DisplacedBlock extends BlockOwner {
   blockId: string;
-  kind: BlockKind;
-  programId: string;
-  programCode: string;
-  programTitle: string;
-  programRank: number;
-  observerUserId: string | null;
-  observerName: string | null;
-  observerEmail: string | null;
   blockStart: number;
   blockEnd: number;
   lostStart: number;
@@ -87,18 +82,12 @@ export function computeImpact(slot: { start: number; end: number }, blocks: read
   for (const d of plan.displacements) {
     const b = byId.get(d.blockId);
     if (!b) continue;
+    const { id, start, end, ...owner } = b;
     displaced.push({
-      blockId: b.id,
-      kind: b.kind,
-      programId: b.programId,
-      programCode: b.programCode,
-      programTitle: b.programTitle,
-      programRank: b.programRank,
-      observerUserId: b.observerUserId,
-      observerName: b.observerName,
-      observerEmail: b.observerEmail,
-      blockStart: b.start,
-      blockEnd: b.end,
+      ...owner,
+      blockId: id,
+      blockStart: start,
+      blockEnd: end,
       lostStart: d.start,
       lostEnd: d.end,
       change: change.get(b.id) ?? "remove",
