@@ -97,15 +97,19 @@ export function AirmassChart({
   telescopeCode: string;
   textColour?: string;
 }) {
-  const first = sky.points[0]?.t ?? 0;
-  const last = sky.points[sky.points.length - 1]?.t ?? first + 1;
+  const times = sky.samples.t;
+  const first = times[0] ?? 0;
+  const last = times[times.length - 1] ?? first + 1;
   const yMax = Math.min(5, Math.max(3, Math.ceil((airmassLimit + 0.5) * 2) / 2));
 
   const { data, options, plugins, label } = useMemo(() => {
-    const target: Point[] = sky.points.map((p) => ({ x: p.t, y: p.airmass === null || p.airmass > 10 ? null : p.airmass }));
-    const moon: Point[] = sky.points.map((p) => {
-      const m = airmassKastenYoung(p.moonAltitudeDeg);
-      return { x: p.t, y: m === null || m > 10 ? null : m };
+    const target: Point[] = times.map((t, i) => {
+      const a = sky.samples.airmass[i] ?? null;
+      return { x: t, y: a === null || a > 10 ? null : a };
+    });
+    const moon: Point[] = times.map((t, i) => {
+      const m = airmassKastenYoung(sky.samples.moonAltitudeDeg[i] ?? -90);
+      return { x: t, y: m === null || m > 10 ? null : m };
     });
     const inNight = windows
       .map((w) => ({ from: Date.parse(w.start), to: Date.parse(w.end) }))
@@ -182,7 +186,7 @@ export function AirmassChart({
       plugins: [backgroundPlugin(twilightBands(sky, first, last), inNight)],
       label: `Airmass of ${targetName || "the target"} from ${telescopeCode} on the night of ${sky.nightOf}: ${summary}; limit ${airmassLimit.toFixed(2)}.`,
     };
-  }, [sky, windows, airmassLimit, targetName, telescopeCode, textColour, first, last, yMax]);
+  }, [sky, times, windows, airmassLimit, targetName, telescopeCode, textColour, first, last, yMax]);
 
   return (
     <div className="h-64 w-full">

@@ -24,9 +24,10 @@ const RATE = SIDEREAL_RATE;
 const SUN_RATE = (1.2 * DEG) / 86_400_000;
 
 export class MovingTargetSolver {
-  private sampleTimes = new Float64Array(2048);
-  private sampleBase = new Float64Array(2048);
-  private sampleAll = new Float64Array(2048);
+  // Grown on first use: every Planner makes a solver, but only moving targets sample.
+  private sampleTimes = new Float64Array(0);
+  private sampleBase = new Float64Array(0);
+  private sampleAll = new Float64Array(0);
   private readonly posBuf = new Float64Array(4);
   private readonly margins = new Float64Array(12);
 

@@ -2,12 +2,14 @@
 // clock, no I/O. Instants go out as ISO 8601 UTC ("…Z") with a local-time twin for display.
 
 import {
+  type CurvePoint,
   Ephemeris,
   fadingClock,
   formatDec,
   formatLocalIso,
   formatUtcIso,
   type Instant,
+  type NightEvents,
   type NightPlan,
   nightsBetween,
   nightSpan,
@@ -23,8 +25,8 @@ import type { VisibilityRequest } from "./schema";
 export const PLANNING_DISCLAIMER =
   "Planning aid only: the decision to open, point or close a telescope rests with the night assistant and the observatory's own operating procedures and safety rules.";
 
-const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
-const roundOrNull = (x: number | null, digits: number) => (x === null ? null : round(x, digits));
+export const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
+export const roundOrNull = (x: number | null, digits: number) => (x === null ? null : round(x, digits));
 
 interface Moment {
   utc: string;
@@ -150,25 +152,30 @@ function toTarget(t: VisibilityRequest["target"]): { target: Target; ephemeris: 
   return { target: { kind: "ephemeris", ephemeris }, ephemeris };
 }
 
+/** A night's Sun events, each in UTC and the site's local time. */
+export function twilightOut(e: NightEvents, tz: string): VisibilityNight["twilight"] {
+  const m = (t: Instant | null) => moment(t, tz);
+  return {
+    sunset: m(e.sunset),
+    civilDusk: m(e.civilDusk),
+    nauticalDusk: m(e.nauticalDusk),
+    astronomicalDusk: m(e.astronomicalDusk),
+    astronomicalDawn: m(e.astronomicalDawn),
+    nauticalDawn: m(e.nauticalDawn),
+    civilDawn: m(e.civilDawn),
+    sunrise: m(e.sunrise),
+    solarMidnight: m(e.solarMidnight)!,
+    sunAltitudeAtMidnightDeg: round(e.sunAltitudeAtMidnightDeg, 2),
+  };
+}
+
 function nightOut(plan: NightPlan, tz: string): VisibilityNight {
   const m = (t: Instant | null) => moment(t, tz);
-  const e = plan.events;
   return {
     nightOf: plan.nightOf,
     start: m(plan.start)!,
     end: m(plan.end)!,
-    twilight: {
-      sunset: m(e.sunset),
-      civilDusk: m(e.civilDusk),
-      nauticalDusk: m(e.nauticalDusk),
-      astronomicalDusk: m(e.astronomicalDusk),
-      astronomicalDawn: m(e.astronomicalDawn),
-      nauticalDawn: m(e.nauticalDawn),
-      civilDawn: m(e.civilDawn),
-      sunrise: m(e.sunrise),
-      solarMidnight: m(e.solarMidnight)!,
-      sunAltitudeAtMidnightDeg: round(e.sunAltitudeAtMidnightDeg, 2),
-    },
+    twilight: twilightOut(plan.events, tz),
     dark: plan.dark.map((d) => ({ start: m(d.start)!, end: m(d.end)! })),
     windows: plan.windows.map((w) => ({
       start: m(w.start)!,
@@ -214,13 +221,24 @@ function overallSunAvoidance(nights: NightPlan[]): { status: SunAvoidanceStatus;
   return { status: "clear", reason: "Clear of the Sun's avoidance zone on every night." };
 }
 
-export function computeVisibility(input: VisibilityRequest): VisibilityResult {
-  const tz = input.site.timeZone;
+/** The engine's answer before formatting: instants as epoch milliseconds. */
+export interface VisibilityPlan {
+  site: Site;
+  /** The engine's effective limits (the stricter of telescope and request). */
+  minAltitudeDeg: number;
+  nights: NightPlan[];
+  /** Airmass chart samples, single-night requests only. */
+  curve: CurvePoint[] | null;
+  ephemeris: Ephemeris | null;
+}
+
+/** computeVisibility without the formatting, for callers that want the numbers (the request feasibility check). */
+export function planVisibility(input: VisibilityRequest): VisibilityPlan {
   const site: Site = {
     latitudeDeg: input.site.latitudeDeg,
     longitudeDeg: input.site.longitudeDeg,
     heightM: input.site.heightM,
-    timeZone: tz,
+    timeZone: input.site.timeZone,
   };
   const { target, ephemeris } = toTarget(input.target);
   const request: PlanRequest = {
@@ -235,30 +253,40 @@ export function computeVisibility(input: VisibilityRequest): VisibilityResult {
     input.when.night !== undefined
       ? [nightSpan(site, input.when.night)]
       : nightsBetween(site, input.when.from!, input.when.to!);
-  const plans = spans.map((span) => planner.night(span));
+  const nights = spans.map((span) => planner.night(span));
 
-  let curve: VisibilityResult["curve"] = null;
+  let curve: CurvePoint[] | null = null;
   if (spans.length === 1) {
     const span = spans[0]!;
-    const e = plans[0]!.events;
+    const e = nights[0]!.events;
     const step = input.options.curveStepMinutes;
     // Sunset to sunrise with an hour either side, or the whole night if the Sun stays up or down.
     const from = e.sunset !== null ? Math.max(span.start, e.sunset - 3_600_000) : span.start;
     const to = e.sunrise !== null ? Math.min(span.end, e.sunrise + 3_600_000) : span.end;
     const aligned = Math.ceil(from / (step * 60_000)) * step * 60_000;
-    curve = {
-      stepMinutes: step,
-      points: planner.curve(span, step, aligned, to).map((p) => ({
-        time: formatUtcIso(p.time),
-        altitudeDeg: roundOrNull(p.altitudeDeg, 3),
-        azimuthDeg: roundOrNull(p.azimuthDeg, 3),
-        airmass: roundOrNull(p.airmass, 4),
-        sunAltitudeDeg: round(p.sunAltitudeDeg, 3),
-        moonAltitudeDeg: round(p.moonAltitudeDeg, 3),
-        moonSeparationDeg: roundOrNull(p.moonSeparationDeg, 3),
-      })),
-    };
+    curve = planner.curve(span, step, aligned, to);
   }
+  return { site, minAltitudeDeg: planner.limits.minAltitudeDeg, nights, curve, ephemeris };
+}
+
+export function computeVisibility(input: VisibilityRequest): VisibilityResult {
+  const tz = input.site.timeZone;
+  const { site, minAltitudeDeg, nights: plans, curve: samples, ephemeris } = planVisibility(input);
+  const curve: VisibilityResult["curve"] =
+    samples === null
+      ? null
+      : {
+          stepMinutes: input.options.curveStepMinutes,
+          points: samples.map((p) => ({
+            time: formatUtcIso(p.time),
+            altitudeDeg: roundOrNull(p.altitudeDeg, 3),
+            azimuthDeg: roundOrNull(p.azimuthDeg, 3),
+            airmass: roundOrNull(p.airmass, 4),
+            sunAltitudeDeg: round(p.sunAltitudeDeg, 3),
+            moonAltitudeDeg: round(p.moonAltitudeDeg, 3),
+            moonSeparationDeg: roundOrNull(p.moonSeparationDeg, 3),
+          })),
+        };
 
   let fading: VisibilityResult["fading"] = null;
   const limitingMagnitude = input.instrument?.limitingMagnitude;
@@ -266,7 +294,7 @@ export function computeVisibility(input: VisibilityRequest): VisibilityResult {
     const H = input.target.absoluteMagnitude;
     const hasMagnitudes = ephemeris.rows.some((r) => r.magnitude !== undefined);
     if (H !== undefined || hasMagnitudes) {
-      const clock = fadingClock({ ephemeris, H, G: input.target.slopeG, limitingMagnitude, from: spans[0]!.start });
+      const clock = fadingClock({ ephemeris, H, G: input.target.slopeG, limitingMagnitude, from: plans[0]!.start });
       const when = clock.fainterThanLimitAt;
       const mag = (x: number) => x.toFixed(1);
       const reason = clock.alreadyFainter
@@ -306,7 +334,7 @@ export function computeVisibility(input: VisibilityRequest): VisibilityResult {
           }
         : { kind: "ephemeris", name: input.target.name ?? null, ra: null, dec: null, raDeg: null, decDeg: null },
     limits: {
-      minAltitudeDeg: round(planner.limits.minAltitudeDeg, 3),
+      minAltitudeDeg: round(minAltitudeDeg, 3),
       maxAirmass: input.constraints.maxAirmass ?? input.telescope.maxAirmass ?? null,
       darkness: input.constraints.darkness,
       sunAvoidanceDeg: input.telescope.sunAvoidanceDeg,

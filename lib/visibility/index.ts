@@ -1,7 +1,12 @@
 export {
   computeVisibility,
+  planVisibility,
   PLANNING_DISCLAIMER,
+  round,
+  roundOrNull,
+  twilightOut,
   type VisibilityNight,
+  type VisibilityPlan,
   type VisibilityResult,
   type VisibilityWindow,
 } from "./compute";

@@ -6,12 +6,12 @@
  * Least recently used answers go first. Answers are shared: callers must not mutate them.
  */
 import { createHash } from "node:crypto";
-import { computeVisibility, type VisibilityRequest, type VisibilityResult } from "@/lib/visibility";
+import { planVisibility, type VisibilityPlan, type VisibilityRequest } from "@/lib/visibility";
 
 const MAX_ENTRIES = 400;
-const entries = new Map<string, VisibilityResult>();
+const entries = new Map<string, VisibilityPlan>();
 
-export function cachedVisibility(request: VisibilityRequest): VisibilityResult {
+export function cachedVisibility(request: VisibilityRequest): VisibilityPlan {
   // The request is built field by field in a fixed order, so its JSON is a stable key.
   const key = createHash("sha1").update(JSON.stringify(request)).digest("base64");
   const hit = entries.get(key);
@@ -20,7 +20,7 @@ export function cachedVisibility(request: VisibilityRequest): VisibilityResult {
     entries.set(key, hit);
     return hit;
   }
-  const result = computeVisibility(request);
+  const result = planVisibility(request);
   entries.set(key, result);
   if (entries.size > MAX_ENTRIES) entries.delete(entries.keys().next().value as string);
   return result;

@@ -7,13 +7,13 @@
  * airmass curve for the chart), the rest in one range call. Telescopes sharing a site see
  * the same sky, so only the first telescope of a site pays for the curves.
  */
-import { airmassKastenYoung, nightOfInstant, nightsBetween, type Site } from "@/lib/sky";
-import { computeVisibility, PLANNING_DISCLAIMER, type VisibilityNight, type VisibilityRequest, type VisibilityResult } from "@/lib/visibility";
+import { airmassKastenYoung, type NightPlan, nightOfInstant, nightsBetween, type Site } from "@/lib/sky";
+import { PLANNING_DISCLAIMER, planVisibility, round, roundOrNull, twilightOut, type VisibilityPlan, type VisibilityRequest } from "@/lib/visibility";
 import type { FeasibilityInput } from "../schemas";
 import { fadingSummary } from "./fading";
 import { visibilityRequest, visibilityTarget } from "./inputs";
 import type { FeasibilityReport, InstrumentRef, SiteSky, SkyNight, TelescopeFeasibility, TelescopeSky } from "./types";
-import { feasibilityNight, refusalReasons, telescopeVerdict } from "./verdict";
+import { feasibilityNight, refusalReasons, telescopeVerdict, toSecond } from "./verdict";
 
 export const CHART_NIGHTS = 3;
 /** The request schema keeps windows within 31 days; one spare night for time zones. */
@@ -22,31 +22,32 @@ const MAX_NIGHTS = 33;
 export const SUN_SAFETY_NOTE =
   "A request that breaks a telescope's sun avoidance limit is refused, never scheduled: pointing near the Sun can destroy instruments and blind people.";
 
-function isOver(result: VisibilityResult, horizonStart: number): boolean {
-  const dark = result.nights[0]?.dark ?? [];
-  return dark.length > 0 && dark.every((d) => Date.parse(d.end.utc) <= horizonStart);
+function isOver(plan: VisibilityPlan, horizonStart: number): boolean {
+  const dark = plan.nights[0]?.dark ?? [];
+  return dark.length > 0 && dark.every((d) => toSecond(d.end) <= horizonStart);
 }
 
-function skyNight(result: VisibilityResult): SkyNight | null {
-  const night = result.nights[0];
-  if (!night || !result.curve) return null;
+function skyNight(plan: VisibilityPlan, timeZone: string): SkyNight | null {
+  const night = plan.nights[0];
+  if (!night || !plan.curve) return null;
   return {
     nightOf: night.nightOf,
-    twilight: night.twilight,
-    moonIllumination: night.moon.illumination,
-    points: result.curve.points.map((p) => ({
-      t: Date.parse(p.time),
-      airmass: p.airmass,
-      altitudeDeg: p.altitudeDeg,
-      moonAltitudeDeg: p.moonAltitudeDeg,
-      sunAltitudeDeg: p.sunAltitudeDeg,
-    })),
+    twilight: twilightOut(night.events, timeZone),
+    moonIllumination: round(night.moon.illumination, 3),
+    // Parallel arrays: a third of the bytes of one object per sample, for the same numbers.
+    samples: {
+      t: plan.curve.map((p) => toSecond(p.time)),
+      airmass: plan.curve.map((p) => roundOrNull(p.airmass, 4)),
+      altitudeDeg: plan.curve.map((p) => roundOrNull(p.altitudeDeg, 3)),
+      moonAltitudeDeg: plan.curve.map((p) => round(p.moonAltitudeDeg, 3)),
+      sunAltitudeDeg: plan.curve.map((p) => round(p.sunAltitudeDeg, 3)),
+    },
   };
 }
 
 export interface ComputeOptions {
-  /** The sky engine's entry point; the API passes a cached one (lib/requests/feasibility/cache.ts). */
-  visibility?: (request: VisibilityRequest) => VisibilityResult;
+  /** The sky engine's entry point; the preview passes a cached one (lib/requests/feasibility/cache.ts). */
+  visibility?: (request: VisibilityRequest) => VisibilityPlan;
 }
 
 export function computeFeasibility(
@@ -54,7 +55,7 @@ export function computeFeasibility(
   telescopes: TelescopeSky[],
   instrument: InstrumentRef | null,
   now: Date,
-  { visibility = computeVisibility }: ComputeOptions = {},
+  { visibility = planVisibility }: ComputeOptions = {},
 ): FeasibilityReport {
   const horizonStart = Math.max(input.earliestStart.getTime(), now.getTime());
   const horizonEnd = Math.min(input.latestEnd.getTime(), input.deadline.getTime());
@@ -64,8 +65,8 @@ export function computeFeasibility(
 
   const results: TelescopeFeasibility[] = telescopes.map((telescope) => {
     const site: Site = { latitudeDeg: telescope.site.latitudeDeg, longitudeDeg: telescope.site.longitudeDeg, heightM: telescope.site.heightM, timeZone: telescope.site.timeZone };
-    const nights: VisibilityNight[] = [];
-    let limits: VisibilityResult["limits"] | null = null;
+    const nights: NightPlan[] = [];
+    let engineMinAltitudeDeg: number | null = null;
     if (horizonEnd > horizonStart) {
       const first = nightOfInstant(site, horizonStart).nightOf;
       const last = nightOfInstant(site, horizonEnd - 1).nightOf;
@@ -77,10 +78,10 @@ export function computeFeasibility(
         while (next < spans.length && sky.nights.length < CHART_NIGHTS) {
           const result = visibility(visibilityRequest(input, telescope, target, { night: spans[next]!.nightOf }));
           next += 1;
-          limits = result.limits;
+          engineMinAltitudeDeg = result.minAltitudeDeg;
           nights.push(...result.nights);
           // A night whose darkness ended before the horizon opens is not worth a chart.
-          const chart = isOver(result, horizonStart) ? null : skyNight(result);
+          const chart = isOver(result, horizonStart) ? null : skyNight(result, telescope.site.timeZone);
           if (chart) sky.nights.push(chart);
         }
         skies.set(telescope.site.id, sky);
@@ -88,11 +89,11 @@ export function computeFeasibility(
       }
       if (rest.length > 0) {
         const result = visibility(visibilityRequest(input, telescope, target, { from: rest[0]!.nightOf, to: rest[rest.length - 1]!.nightOf }));
-        limits = result.limits;
+        engineMinAltitudeDeg = result.minAltitudeDeg;
         nights.push(...result.nights);
       }
     }
-    const minAltitudeDeg = limits?.minAltitudeDeg ?? telescope.minAltitudeDeg;
+    const minAltitudeDeg = engineMinAltitudeDeg === null ? telescope.minAltitudeDeg : round(engineMinAltitudeDeg, 3);
     const perNight = nights.map((n) => feasibilityNight(n, horizonStart, horizonEnd));
     for (const n of perNight) for (const text of n.notes) notes.add(text);
     return telescopeVerdict({

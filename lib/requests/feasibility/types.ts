@@ -3,7 +3,7 @@
  * windows inside the request's horizon (from max(earliest start, now) to the earlier of
  * latest end and deadline) and a verdict; per site, the sky of the first nights for the
  * airmass charts; and the fading clock. Instants are ISO 8601 UTC strings (chart samples:
- * epoch milliseconds) so the report crosses the wire and the database unchanged.
+ * epoch milliseconds, in parallel arrays) so the report crosses the wire and the database unchanged.
  *
  * The zod schemas describe the report in the OpenAPI document; the types come from them.
  */
@@ -65,15 +65,15 @@ export const skyNightSchema = z.object({
     sunAltitudeAtMidnightDeg: z.number(),
   }),
   moonIllumination: z.number(),
-  points: z.array(
-    z.object({
-      t: z.number().meta({ description: "Epoch milliseconds, UTC." }),
-      airmass: z.number().nullable(),
-      altitudeDeg: z.number().nullable(),
-      moonAltitudeDeg: z.number(),
-      sunAltitudeDeg: z.number(),
-    }),
-  ),
+  samples: z
+    .object({
+      t: z.array(z.number()).meta({ description: "Epoch milliseconds, UTC." }),
+      airmass: z.array(z.number().nullable()),
+      altitudeDeg: z.array(z.number().nullable()),
+      moonAltitudeDeg: z.array(z.number()),
+      sunAltitudeDeg: z.array(z.number()),
+    })
+    .meta({ description: "The night sampled every 10 minutes as parallel arrays: entry i of each belongs to t[i]." }),
 });
 
 export const siteSkySchema = z.object({ siteId: z.string(), siteName: z.string(), timeZone: z.string(), nights: z.array(skyNightSchema) });
@@ -109,7 +109,6 @@ export type FeasibilityWindow = z.infer<typeof feasibilityWindowSchema>;
 export type FeasibilityNight = z.infer<typeof feasibilityNightSchema>;
 export type TelescopeVerdict = z.infer<typeof telescopeFeasibilitySchema>["verdict"];
 export type TelescopeFeasibility = z.infer<typeof telescopeFeasibilitySchema>;
-export type SkyPoint = z.infer<typeof skyNightSchema>["points"][number];
 export type SkyNight = z.infer<typeof skyNightSchema>;
 export type SiteSky = z.infer<typeof siteSkySchema>;
 export type FadingSummary = z.infer<typeof fadingSummarySchema>;

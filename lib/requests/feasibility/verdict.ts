@@ -5,26 +5,29 @@
  * the target is inside the Sun's avoidance zone on every night is refused outright, and a
  * request that lists such a telescope cannot be filed.
  */
-import type { SunAvoidanceStatus } from "@/lib/sky";
+import type { NightPlan, SunAvoidanceStatus } from "@/lib/sky";
 import { formatUt } from "@/lib/time/format";
-import type { VisibilityNight } from "@/lib/visibility";
+import { round, roundOrNull } from "@/lib/visibility";
 import type { FeasibilityNight, FeasibilityWindow, TelescopeFeasibility, TelescopeVerdict } from "./types";
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 
-function clip(night: VisibilityNight, start: number, end: number): FeasibilityWindow[] {
+/** Instants leave the report to the whole second, as the engine's formatted answers do. */
+export const toSecond = (t: number) => Math.round(t / 1000) * 1000;
+
+function clip(night: NightPlan, start: number, end: number): FeasibilityWindow[] {
   const out: FeasibilityWindow[] = [];
   for (const w of night.windows) {
-    const s = Math.max(Date.parse(w.start.utc), start);
-    const e = Math.min(Date.parse(w.end.utc), end);
+    const s = Math.max(toSecond(w.start), start);
+    const e = Math.min(toSecond(w.end), end);
     if (e - s >= 1000) {
-      out.push({ start: new Date(s).toISOString(), end: new Date(e).toISOString(), durationMinutes: round1((e - s) / 60_000), bestAirmass: w.bestAirmass });
+      out.push({ start: new Date(s).toISOString(), end: new Date(e).toISOString(), durationMinutes: round1((e - s) / 60_000), bestAirmass: roundOrNull(w.bestAirmass, 3) });
     }
   }
   return out;
 }
 
-export function feasibilityNight(night: VisibilityNight, horizonStart: number, horizonEnd: number): FeasibilityNight {
+export function feasibilityNight(night: NightPlan, horizonStart: number, horizonEnd: number): FeasibilityNight {
   const windows = clip(night, horizonStart, horizonEnd);
   const airmasses = windows.map((w) => w.bestAirmass).filter((a): a is number => a !== null);
   return {
@@ -32,8 +35,8 @@ export function feasibilityNight(night: VisibilityNight, horizonStart: number, h
     windows,
     observableMinutes: round1(windows.reduce((sum, w) => sum + w.durationMinutes, 0)),
     bestAirmass: airmasses.length > 0 ? Math.min(...airmasses) : null,
-    moonIllumination: night.moon.illumination,
-    moonClosestDeg: night.moon.closestSeparationDeg,
+    moonIllumination: round(night.moon.illumination, 3),
+    moonClosestDeg: roundOrNull(night.moon.closestSeparationDeg, 2),
     sunAvoidance: night.sunAvoidance.status,
     sunAvoidanceReason: night.sunAvoidance.reason,
     notes: night.notes,

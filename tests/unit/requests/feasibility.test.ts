@@ -3,10 +3,12 @@
 // placed relative to the Sun keep every case independent of the calendar.
 import { describe, expect, it } from "vitest";
 import { CHART_NIGHTS, computeFeasibility } from "@/lib/requests/feasibility/compute";
+import { visibilityRequest, visibilityTarget } from "@/lib/requests/feasibility/inputs";
 import { toSnapshot } from "@/lib/requests/feasibility/snapshot";
 import type { InstrumentRef, TelescopeSky } from "@/lib/requests/feasibility/types";
 import { feasibilityInputSchema, type RequestFormValues } from "@/lib/requests/schemas";
 import { formatDec, formatRa, sunPosition } from "@/lib/sky";
+import { computeVisibility } from "@/lib/visibility";
 
 const NOW = new Date("2027-03-10T15:00:00Z");
 const HOUR = 3_600_000;
@@ -49,7 +51,7 @@ describe("computeFeasibility", () => {
     expect(report.telescopes.map((t) => t.verdict)).toEqual(["feasible", "feasible"]);
     expect(report.skies).toHaveLength(1);
     expect(report.skies[0]?.nights).toHaveLength(CHART_NIGHTS);
-    for (const night of report.skies[0]!.nights) expect(night.points.length).toBeGreaterThan(40);
+    for (const night of report.skies[0]!.nights) expect(night.samples.t.length).toBeGreaterThan(40);
     const windows = report.telescopes.flatMap((t) => t.nights.flatMap((n) => n.windows));
     for (const w of windows) {
       expect(Date.parse(w.start)).toBeGreaterThanOrEqual(NOW.getTime());
@@ -106,5 +108,22 @@ describe("computeFeasibility", () => {
     expect(snapshot.fading).not.toHaveProperty("curve");
     expect(snapshot.fading?.source).toBe("ephemeris");
     expect(snapshot.telescopes[0]?.nights.length).toBeGreaterThan(0);
+  });
+
+  it("charts and windows the same numbers as the public visibility answer for the same night", () => {
+    const request = input({ kind: "fixed", ...antiSolar });
+    const report = computeFeasibility(request, [big], null, NOW);
+    const night = report.skies[0]!.nights[0]!;
+    const visibility = computeVisibility(visibilityRequest(request, big, visibilityTarget(request.target), { night: night.nightOf }));
+    const points = visibility.curve!.points;
+    expect(night.samples.t).toEqual(points.map((p) => Date.parse(p.time)));
+    expect(night.samples.airmass).toEqual(points.map((p) => p.airmass));
+    expect(night.samples.moonAltitudeDeg).toEqual(points.map((p) => p.moonAltitudeDeg));
+    expect(night.twilight).toEqual(visibility.nights[0]!.twilight);
+    const windows = visibility.nights[0]!.windows.map((w) => ({ start: Date.parse(w.start.utc), end: Date.parse(w.end.utc), bestAirmass: w.bestAirmass }));
+    const clipped = report.telescopes[0]!.nights.find((n) => n.nightOf === night.nightOf)!.windows.map((w) => ({ start: Date.parse(w.start), end: Date.parse(w.end), bestAirmass: w.bestAirmass }));
+    expect(windows.length).toBeGreaterThan(0);
+    // The report clips windows to its horizon (from NOW on): the ends and best airmass agree.
+    expect(clipped.map((w) => [w.end, w.bestAirmass])).toEqual(windows.filter((w) => w.end > NOW.getTime()).map((w) => [w.end, w.bestAirmass]));
   });
 });

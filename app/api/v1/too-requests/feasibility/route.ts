@@ -1,8 +1,7 @@
 import { getDb } from "@/db/index";
 import { ApiError } from "@/lib/api/errors";
 import { apiRoute, readJson } from "@/lib/api/handler";
-import { cachedVisibility } from "@/lib/requests/feasibility/cache";
-import { computeFeasibility } from "@/lib/requests/feasibility/compute";
+import { previewReportJson } from "@/lib/requests/feasibility/preview-pool";
 import { previewReference } from "@/lib/requests/feasibility/reference-cache";
 import { feasibilityInputSchema } from "@/lib/requests/schemas";
 
@@ -15,5 +14,6 @@ export const POST = apiRoute([], async ({ request }) => {
   if (known.length !== input.telescopeIds.length) {
     throw new ApiError(400, "invalid_input", "One of the chosen telescopes does not exist.", { telescopeIds: "One of the chosen telescopes does not exist." });
   }
-  return Response.json(computeFeasibility(input, known, instrument ?? null, new Date(), { visibility: cachedVisibility }));
+  const json = await previewReportJson(input, known, instrument ?? null, new Date());
+  return new Response(json, { headers: { "content-type": "application/json" } });
 });
