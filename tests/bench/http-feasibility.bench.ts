@@ -4,6 +4,8 @@
  * (two sites) over a 3-night window, from 16 concurrent clients. Every request asks about
  * a different target, so no answer comes from the preview's cache of nights: this is the
  * cost of PIs all typing new coordinates at once. Target: p95 under 150 ms.
+ * Then, for information (no target), the same with a moving target: an hourly ephemeris
+ * with r and Δ over the window, and the fading clock against the instrument's limit.
  */
 import { randomInt } from "node:crypto";
 import type autocannon from "autocannon";
@@ -21,9 +23,20 @@ await db.destroy();
 
 const HOUR = 3_600_000;
 const now = Date.now();
-function body(raDeg: number): string {
+function ephemeris(raDeg: number) {
+  // Hourly rows from 12 h before now to 12 h after the deadline, moving 0.05°/h.
+  return Array.from({ length: 96 }, (_, i) => ({
+    time: new Date(now + (i - 12) * HOUR).toISOString(),
+    ra: ((raDeg + 0.05 * i) % 360).toFixed(4),
+    dec: (-25 + 0.02 * i).toFixed(4),
+    rAu: 1.2 + 0.001 * i,
+    deltaAu: 0.3 + 0.002 * i,
+  }));
+}
+
+function body(raDeg: number, moving = false): string {
   return JSON.stringify({
-    target: { kind: "fixed", ra: raDeg.toFixed(4), dec: "-25" },
+    target: moving ? { kind: "ephemeris", hMag: "17.5", ephemeris: ephemeris(raDeg) } : { kind: "fixed", ra: raDeg.toFixed(4), dec: "-25" },
     telescopeIds: telescopes.map((t) => t.id),
     instrumentId: instrument?.id,
     durationMinutes: 90,
@@ -47,3 +60,9 @@ await runLoad({ url, method: "POST", headers, connections: 16, duration: 3, requ
 const result = await runLoad({ url, method: "POST", headers, connections: 16, duration: 10, requests });
 printLoad("feasibility preview, 16 clients, a new target each time", result, "p95 < 150 ms");
 if (result.non2xx > 0 || result.errors > 0) console.log(`feasibility preview: ${result.non2xx} non-2xx answers and ${result.errors} errors during the run`);
+
+const movingProbe = await fetch(url, { method: "POST", headers, body: body(83.8, true) });
+if (!movingProbe.ok) throw new Error(`the preview answered ${movingProbe.status} for a moving target: ${await movingProbe.text()}`);
+const moving: autocannon.Request[] = [{ setupRequest: (request: autocannon.Request) => ({ ...request, body: body(randomInt(0, 3_600_000) / 10_000, true) }) }];
+const movingResult = await runLoad({ url, method: "POST", headers, connections: 16, duration: 10, requests: moving });
+printLoad("feasibility preview, moving target (96-row ephemeris), 16 clients, no target", movingResult);
