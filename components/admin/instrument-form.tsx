@@ -1,12 +1,11 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useForm } from "react-hook-form";
 import type { ActionResult } from "@/lib/actions/result";
 import { emptyInstrumentForm, instrumentSchema, type InstrumentFormValues } from "@/lib/instruments/schemas";
 import { FormInput, FormSelect, type SelectOption } from "./form-controls";
 import { FormFooter } from "./form-footer";
-import { useSaveAction } from "./use-save-action";
+import { useEditorForm } from "./use-save-action";
 
 export function InstrumentForm({
   instrumentId,
@@ -20,18 +19,17 @@ export function InstrumentForm({
   telescopes: SelectOption[];
   action: (id: string | null, input: unknown) => Promise<ActionResult>;
 }) {
-  const {
-    register,
-    handleSubmit,
-    reset,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<InstrumentFormValues>({ resolver: zodResolver(instrumentSchema, undefined, { raw: true }), defaultValues: initial });
-  const { result, submit } = useSaveAction<InstrumentFormValues>((v) => action(instrumentId, v), setError, (v) => reset(instrumentId ? v : emptyInstrumentForm));
+  const { register, formState: { errors, isSubmitting }, result, onSubmit } = useEditorForm({
+    id: instrumentId,
+    initial,
+    empty: emptyInstrumentForm,
+    resolver: zodResolver(instrumentSchema, undefined, { raw: true }),
+    action,
+  });
 
   return (
     <form
-      onSubmit={handleSubmit(submit)}
+      onSubmit={onSubmit}
       noValidate
       aria-label={instrumentId ? "Edit the instrument" : "Create an instrument"}
       className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-4"

@@ -3,7 +3,7 @@
 import { DataTable, type ColumnDef } from "@/components/ui/data-table";
 import type { ActionResult } from "@/lib/actions/result";
 import type { Instrument } from "@/lib/instruments/queries";
-import { RowActions } from "./row-actions";
+import { rowActionsColumn } from "./row-actions";
 
 export function InstrumentsTable({ instruments, deleteAction }: { instruments: Instrument[]; deleteAction: (id: string) => Promise<ActionResult> }) {
   const columns: ColumnDef<Instrument>[] = [
@@ -12,19 +12,7 @@ export function InstrumentsTable({ instruments, deleteAction }: { instruments: I
     { accessorKey: "name", header: "Name" },
     { accessorKey: "limitingMagnitude", header: "Limiting mag", meta: { numeric: true } },
     { accessorKey: "blockCount", header: "Blocks", meta: { numeric: true } },
-    {
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      enableSorting: false,
-      enableGlobalFilter: false,
-      cell: ({ row }) => (
-        <RowActions
-          editHref={`/admin/instruments?edit=${row.original.id}`}
-          label={`instrument ${row.original.telescopeCode} ${row.original.code}`}
-          onDelete={() => deleteAction(row.original.id)}
-        />
-      ),
-    },
+    rowActionsColumn("instrument", (r) => `${r.telescopeCode} ${r.code}`, deleteAction),
   ];
   return (
     <DataTable

@@ -3,22 +3,14 @@
 import { DataTable, type ColumnDef } from "@/components/ui/data-table";
 import type { ActionResult } from "@/lib/actions/result";
 import type { Partner } from "@/lib/partners/queries";
-import { RowActions } from "./row-actions";
+import { rowActionsColumn } from "./row-actions";
 
 export function PartnersTable({ partners, deleteAction }: { partners: Partner[]; deleteAction: (id: string) => Promise<ActionResult> }) {
   const columns: ColumnDef<Partner>[] = [
     { accessorKey: "code", header: "Code", cell: ({ row }) => <span className="num font-medium">{row.original.code}</span> },
     { accessorKey: "name", header: "Name" },
     { accessorKey: "programCount", header: "Programs", meta: { numeric: true } },
-    {
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      enableSorting: false,
-      enableGlobalFilter: false,
-      cell: ({ row }) => (
-        <RowActions editHref={`/admin/partners?edit=${row.original.id}`} label={`partner ${row.original.code}`} onDelete={() => deleteAction(row.original.id)} />
-      ),
-    },
+    rowActionsColumn("partner", (r) => r.code, deleteAction),
   ];
   return (
     <DataTable

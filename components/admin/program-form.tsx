@@ -1,13 +1,13 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { Controller, useForm } from "react-hook-form";
+import { Controller } from "react-hook-form";
 import { CheckboxList, type CheckboxOption } from "@/components/ui/checkbox-list";
 import type { ActionResult } from "@/lib/actions/result";
 import { CATEGORY_LABELS, emptyProgramForm, PROGRAM_CATEGORIES, programSchema, type ProgramFormValues } from "@/lib/programs/schemas";
 import { FormInput, FormSelect, type SelectOption } from "./form-controls";
 import { FormFooter } from "./form-footer";
-import { useSaveAction } from "./use-save-action";
+import { useEditorForm } from "./use-save-action";
 
 const RANKS: SelectOption[] = [1, 2, 3, 4, 5].map((r) => ({ value: String(r), label: r === 1 ? "1 (highest)" : r === 5 ? "5 (lowest)" : String(r) }));
 const CATEGORIES: SelectOption[] = PROGRAM_CATEGORIES.map((c) => ({ value: c, label: CATEGORY_LABELS[c] }));
@@ -30,18 +30,16 @@ export function ProgramForm({
   observers: CheckboxOption[];
   action: (id: string | null, input: unknown) => Promise<ActionResult>;
 }) {
-  const {
-    register,
-    control,
-    handleSubmit,
-    reset,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<ProgramFormValues>({ resolver: zodResolver(programSchema, undefined, { raw: true }), defaultValues: initial });
-  const { result, submit } = useSaveAction<ProgramFormValues>((v) => action(programId, v), setError, (v) => reset(programId ? v : emptyProgramForm));
+  const { register, control, formState: { errors, isSubmitting }, result, onSubmit } = useEditorForm({
+    id: programId,
+    initial,
+    empty: emptyProgramForm,
+    resolver: zodResolver(programSchema, undefined, { raw: true }),
+    action,
+  });
 
   return (
-    <form onSubmit={handleSubmit(submit)} noValidate aria-label={programId ? "Edit the program" : "Create a program"} className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-4">
+    <form onSubmit={onSubmit} noValidate aria-label={programId ? "Edit the program" : "Create a program"} className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-4">
       <FormInput id="program-code" label="Code" error={errors.code?.message} hint="Short and unique, e.g. SCI-101." {...register("code")} />
       <FormInput id="program-title" label="Title" error={errors.title?.message} className="sm:col-span-1 lg:col-span-3" {...register("title")} />
       <FormSelect id="program-semester" label="Semester" options={semesters} error={errors.semesterId?.message} {...register("semesterId")} />

@@ -5,7 +5,7 @@ import { DataTable, type ColumnDef } from "@/components/ui/data-table";
 import type { ActionResult } from "@/lib/actions/result";
 import type { Program } from "@/lib/programs/queries";
 import { CATEGORY_LABELS } from "@/lib/programs/schemas";
-import { RowActions } from "./row-actions";
+import { rowActionsColumn } from "./row-actions";
 
 export function ProgramsTable({ programs, deleteAction }: { programs: Program[]; deleteAction: (id: string) => Promise<ActionResult> }) {
   const columns: ColumnDef<Program>[] = [
@@ -20,15 +20,7 @@ export function ProgramsTable({ programs, deleteAction }: { programs: Program[];
     { id: "category", header: "Category", accessorFn: (p) => CATEGORY_LABELS[p.category], cell: ({ row }) => <KindBadge kind={row.original.category} /> },
     { id: "tooAllowed", header: "ToO allowed", accessorFn: (p) => (p.tooAllowed ? "yes" : "no") },
     { id: "observers", header: "Observers", accessorFn: (p) => p.observers.map((o) => o.name).join(", ") },
-    {
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      enableSorting: false,
-      enableGlobalFilter: false,
-      cell: ({ row }) => (
-        <RowActions editHref={`/admin/programs?edit=${row.original.id}`} label={`program ${row.original.code}`} onDelete={() => deleteAction(row.original.id)} />
-      ),
-    },
+    rowActionsColumn("program", (r) => r.code, deleteAction),
   ];
   return (
     <DataTable

@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
+import type { ColumnDef } from "@/components/ui/data-table";
 import type { ActionResult } from "@/lib/actions/result";
 
 /**
@@ -55,4 +56,21 @@ export function RowActions({ editHref, label, onDelete }: { editHref: string; la
       )}
     </div>
   );
+}
+
+/** The Edit/Delete column of an admin table: `noun` names the page (/admin/<noun>s) and the row. */
+export function rowActionsColumn<T extends { id: string }>(
+  noun: string,
+  label: (row: T) => string,
+  deleteAction: (id: string) => Promise<ActionResult>,
+): ColumnDef<T> {
+  return {
+    id: "actions",
+    header: () => <span className="sr-only">Actions</span>,
+    enableSorting: false,
+    enableGlobalFilter: false,
+    cell: ({ row }) => (
+      <RowActions editHref={`/admin/${noun}s?edit=${row.original.id}`} label={`${noun} ${label(row.original)}`} onDelete={() => deleteAction(row.original.id)} />
+    ),
+  };
 }

@@ -1,12 +1,11 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useForm } from "react-hook-form";
 import type { ActionResult } from "@/lib/actions/result";
 import { emptySemesterForm, semesterSchema, type SemesterFormValues } from "@/lib/semesters/schemas";
 import { FormInput } from "./form-controls";
 import { FormFooter } from "./form-footer";
-import { useSaveAction } from "./use-save-action";
+import { useEditorForm } from "./use-save-action";
 
 export function SemesterForm({
   semesterId,
@@ -18,17 +17,16 @@ export function SemesterForm({
   initial: SemesterFormValues;
   action: (id: string | null, input: unknown) => Promise<ActionResult>;
 }) {
-  const {
-    register,
-    handleSubmit,
-    reset,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<SemesterFormValues>({ resolver: zodResolver(semesterSchema, undefined, { raw: true }), defaultValues: initial });
-  const { result, submit } = useSaveAction<SemesterFormValues>((v) => action(semesterId, v), setError, (v) => reset(semesterId ? v : emptySemesterForm));
+  const { register, formState: { errors, isSubmitting }, result, onSubmit } = useEditorForm({
+    id: semesterId,
+    initial,
+    empty: emptySemesterForm,
+    resolver: zodResolver(semesterSchema, undefined, { raw: true }),
+    action,
+  });
 
   return (
-    <form onSubmit={handleSubmit(submit)} noValidate aria-label={semesterId ? "Edit the semester" : "Create a semester"} className="grid gap-x-4 sm:grid-cols-3">
+    <form onSubmit={onSubmit} noValidate aria-label={semesterId ? "Edit the semester" : "Create a semester"} className="grid gap-x-4 sm:grid-cols-3">
       <FormInput id="semester-code" label="Code" error={errors.code?.message} hint="e.g. 2027A." {...register("code")} />
       {/* datetime-local has no zone: we read it as UT, never as the browser's local time. */}
       <FormInput id="semester-starts" label="Starts (UT)" type="datetime-local" error={errors.startsAt?.message} hint="Date and time in UT." {...register("startsAt")} />

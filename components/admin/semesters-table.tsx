@@ -4,7 +4,7 @@ import { DataTable, type ColumnDef } from "@/components/ui/data-table";
 import type { ActionResult } from "@/lib/actions/result";
 import type { Semester } from "@/lib/semesters/queries";
 import { formatUt } from "@/lib/time/format";
-import { RowActions } from "./row-actions";
+import { rowActionsColumn } from "./row-actions";
 
 const DAY_MS = 86_400_000;
 
@@ -16,15 +16,7 @@ export function SemestersTable({ semesters, deleteAction }: { semesters: Semeste
     { id: "endsAt", header: "Ends UT", accessorFn: (s) => formatUt(s.endsAt), meta: { numeric: true } },
     { id: "days", header: "Days", accessorFn: (s) => Math.round((s.endsAt.getTime() - s.startsAt.getTime()) / DAY_MS), meta: { numeric: true } },
     { accessorKey: "programCount", header: "Programs", meta: { numeric: true } },
-    {
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      enableSorting: false,
-      enableGlobalFilter: false,
-      cell: ({ row }) => (
-        <RowActions editHref={`/admin/semesters?edit=${row.original.id}`} label={`semester ${row.original.code}`} onDelete={() => deleteAction(row.original.id)} />
-      ),
-    },
+    rowActionsColumn("semester", (r) => r.code, deleteAction),
   ];
   return (
     <DataTable

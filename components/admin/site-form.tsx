@@ -2,13 +2,12 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect, useState } from "react";
-import { useForm } from "react-hook-form";
 import type { ActionResult } from "@/lib/actions/result";
 import { emptySiteForm, siteSchema, type SiteFormValues } from "@/lib/sites/schemas";
 import { listTimeZones } from "@/lib/sites/time-zone";
 import { FormInput } from "./form-controls";
 import { FormFooter } from "./form-footer";
-import { useSaveAction } from "./use-save-action";
+import { useEditorForm } from "./use-save-action";
 
 // Suggestions only: the browser's list may differ from the server's, which decides.
 function useTimeZoneSuggestions(): string[] {
@@ -27,18 +26,17 @@ export function SiteForm({
   initial: SiteFormValues;
   action: (id: string | null, input: unknown) => Promise<ActionResult>;
 }) {
-  const {
-    register,
-    handleSubmit,
-    reset,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<SiteFormValues>({ resolver: zodResolver(siteSchema, undefined, { raw: true }), defaultValues: initial });
-  const { result, submit } = useSaveAction<SiteFormValues>((v) => action(siteId, v), setError, (v) => reset(siteId ? v : emptySiteForm));
+  const { register, formState: { errors, isSubmitting }, result, onSubmit } = useEditorForm({
+    id: siteId,
+    initial,
+    empty: emptySiteForm,
+    resolver: zodResolver(siteSchema, undefined, { raw: true }),
+    action,
+  });
   const zones = useTimeZoneSuggestions();
 
   return (
-    <form onSubmit={handleSubmit(submit)} noValidate aria-label={siteId ? "Edit the site" : "Create a site"} className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-3">
+    <form onSubmit={onSubmit} noValidate aria-label={siteId ? "Edit the site" : "Create a site"} className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-3">
       <FormInput id="site-code" label="Code" error={errors.code?.message} hint="Short and unique, e.g. AQS." {...register("code")} />
       <FormInput id="site-name" label="Name" error={errors.name?.message} className="lg:col-span-2" {...register("name")} />
       <FormInput id="site-latitude" label="Latitude (°)" type="number" step="any" error={errors.latitudeDeg?.message} hint="North positive, −90 to 90." {...register("latitudeDeg")} />

@@ -3,7 +3,7 @@
 import { DataTable, type ColumnDef } from "@/components/ui/data-table";
 import type { ActionResult } from "@/lib/actions/result";
 import type { Site } from "@/lib/sites/queries";
-import { RowActions } from "./row-actions";
+import { rowActionsColumn } from "./row-actions";
 
 export function SitesTable({ sites, deleteAction }: { sites: Site[]; deleteAction: (id: string) => Promise<ActionResult> }) {
   const columns: ColumnDef<Site>[] = [
@@ -14,15 +14,7 @@ export function SitesTable({ sites, deleteAction }: { sites: Site[]; deleteActio
     { accessorKey: "heightM", header: "Height m", meta: { numeric: true } },
     { accessorKey: "timeZone", header: "Time zone" },
     { accessorKey: "telescopeCount", header: "Telescopes", meta: { numeric: true } },
-    {
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      enableSorting: false,
-      enableGlobalFilter: false,
-      cell: ({ row }) => (
-        <RowActions editHref={`/admin/sites?edit=${row.original.id}`} label={`site ${row.original.code}`} onDelete={() => deleteAction(row.original.id)} />
-      ),
-    },
+    rowActionsColumn("site", (r) => r.code, deleteAction),
   ];
   return <DataTable data={sites} columns={columns} caption="Sites" filterLabel="Filter sites" getRowId={(s) => s.id} initialSort={[{ id: "code", desc: false }]} emptyText="No sites yet: create the first above." />;
 }

@@ -1,13 +1,13 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { Controller, useForm } from "react-hook-form";
+import { Controller } from "react-hook-form";
 import { CheckboxList, type CheckboxOption } from "@/components/ui/checkbox-list";
 import type { ActionResult } from "@/lib/actions/result";
 import { emptyTelescopeForm, telescopeSchema, type TelescopeFormValues } from "@/lib/telescopes/schemas";
 import { FormInput, FormSelect, type SelectOption } from "./form-controls";
 import { FormFooter } from "./form-footer";
-import { useSaveAction } from "./use-save-action";
+import { useEditorForm } from "./use-save-action";
 
 export function TelescopeForm({
   telescopeId,
@@ -23,20 +23,18 @@ export function TelescopeForm({
   assistants: CheckboxOption[];
   action: (id: string | null, input: unknown) => Promise<ActionResult>;
 }) {
-  const {
-    register,
-    control,
-    handleSubmit,
-    reset,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<TelescopeFormValues>({ resolver: zodResolver(telescopeSchema, undefined, { raw: true }), defaultValues: initial });
-  const { result, submit } = useSaveAction<TelescopeFormValues>((v) => action(telescopeId, v), setError, (v) => reset(telescopeId ? v : emptyTelescopeForm));
+  const { register, control, formState: { errors, isSubmitting }, result, onSubmit } = useEditorForm({
+    id: telescopeId,
+    initial,
+    empty: emptyTelescopeForm,
+    resolver: zodResolver(telescopeSchema, undefined, { raw: true }),
+    action,
+  });
   const number = { type: "number", step: "any" } as const;
 
   return (
     <form
-      onSubmit={handleSubmit(submit)}
+      onSubmit={onSubmit}
       noValidate
       aria-label={telescopeId ? "Edit the telescope" : "Create a telescope"}
       className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-4"

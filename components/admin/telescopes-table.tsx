@@ -3,7 +3,7 @@
 import { DataTable, type ColumnDef } from "@/components/ui/data-table";
 import type { ActionResult } from "@/lib/actions/result";
 import type { Telescope } from "@/lib/telescopes/queries";
-import { RowActions } from "./row-actions";
+import { rowActionsColumn } from "./row-actions";
 
 const hours = (h: number) => `${h > 0 ? "+" : ""}${h}`;
 
@@ -26,15 +26,7 @@ export function TelescopesTable({ telescopes, deleteAction }: { telescopes: Tele
     { accessorKey: "setupMinutes", header: "Setup min", meta: { numeric: true } },
     { id: "assistants", header: "Night assistants", accessorFn: (t) => t.assistants.map((a) => a.name).join(", ") },
     { accessorKey: "instrumentCount", header: "Instruments", meta: { numeric: true } },
-    {
-      id: "actions",
-      header: () => <span className="sr-only">Actions</span>,
-      enableSorting: false,
-      enableGlobalFilter: false,
-      cell: ({ row }) => (
-        <RowActions editHref={`/admin/telescopes?edit=${row.original.id}`} label={`telescope ${row.original.code}`} onDelete={() => deleteAction(row.original.id)} />
-      ),
-    },
+    rowActionsColumn("telescope", (r) => r.code, deleteAction),
   ];
   return (
     <DataTable

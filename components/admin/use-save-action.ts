@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
+import { type DefaultValues, type FieldValues, type Path, type Resolver, useForm, type UseFormSetError } from "react-hook-form";
 import type { ActionResult } from "@/lib/actions/result";
 
 const UNEXPECTED: ActionResult = {
@@ -29,4 +29,26 @@ export function useSaveAction<V extends FieldValues>(save: (values: V) => Promis
   }
 
   return { result, submit };
+}
+
+/**
+ * An editor's form (react-hook-form) wired to its save action: `id` null creates a new
+ * record and empties the form after saving; otherwise it edits and keeps what was saved.
+ */
+export function useEditorForm<V extends FieldValues>({
+  id,
+  initial,
+  empty,
+  resolver,
+  action,
+}: {
+  id: string | null;
+  initial: V;
+  empty: V;
+  resolver: Resolver<V>;
+  action: (id: string | null, input: unknown) => Promise<ActionResult>;
+}) {
+  const form = useForm<V>({ resolver, defaultValues: initial as DefaultValues<V> });
+  const { result, submit } = useSaveAction<V>((v) => action(id, v), form.setError, (v) => form.reset(id ? v : empty));
+  return { ...form, result, onSubmit: form.handleSubmit(submit) };
 }

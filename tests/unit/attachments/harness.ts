@@ -1,7 +1,8 @@
 /**
- * Running an UploadThing route handler and the real browser uploader in Node, as the
- * upload fake's own tests do: a node:http server hands requests to the fetch-style
- * handler, and a fetch-backed stand-in replaces XMLHttpRequest (which Node lacks).
+ * Running an UploadThing route handler and the real browser uploader in Node, for these
+ * tests and the upload fake's own (tests/unit/fakes/upload-server.test.ts): a node:http
+ * server hands requests to the fetch-style handler, and a fetch-backed stand-in replaces
+ * XMLHttpRequest (which Node lacks).
  */
 import { createServer, type Server } from "node:http";
 
