@@ -68,7 +68,7 @@ export function FeasibilityPanel({ values, targetName }: { values: { [K in keyof
       </div>
       {!parsed.success && (
         <p className="text-sm text-muted">
-          {last ? "Showing the last complete preview. " : ""}To see the airmass charts and observable windows, complete or correct {missing.join(", ")}.
+          {last ? "Showing the last complete preview. " : ""}To see the airmass charts and observable windows, complete or correct {new Intl.ListFormat("en-GB", { type: "conjunction" }).format(missing)}.
         </p>
       )}
       {!parsed.success && !last && <PlanningCaution />}

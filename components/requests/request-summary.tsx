@@ -14,7 +14,17 @@ function Item({ term, children }: { term: string; children: React.ReactNode }) {
   );
 }
 
-const orNone = (n: number | null, unit = "") => (n === null ? "none" : `${n}${unit}`);
+/** Only the limits the PI set, in words: "airmass ≤ 2 · Nautical (Sun below −12°) · Moon ≥ 30° away". */
+function constraintsText(c: TooRequest["constraints"]): string {
+  const parts = [
+    c.maxAirmass === null ? "no airmass limit" : `airmass ≤ ${c.maxAirmass}`,
+    DARKNESS_LABELS[c.darkness],
+    c.minMoonSeparationDeg === null ? null : `Moon ≥ ${c.minMoonSeparationDeg}° away`,
+    c.maxMoonIllumination === null ? null : `Moon ≤ ${Math.round(c.maxMoonIllumination * 100)}% lit`,
+  ];
+  if (c.minMoonSeparationDeg === null && c.maxMoonIllumination === null) parts.push("no Moon limits");
+  return parts.filter((p) => p !== null).join(" · ");
+}
 
 /** A filed request, read-only. */
 export function RequestSummary({ request, timeZone }: { request: TooRequest; timeZone: string }) {
@@ -45,10 +55,7 @@ export function RequestSummary({ request, timeZone }: { request: TooRequest; tim
       <Item term="Deadline">{request.deadline ? <Instant at={request.deadline} timeZone={timeZone} /> : "—"}</Item>
       <Item term="Urgency">{request.urgency ? URGENCY_LABELS[request.urgency] : "—"}</Item>
       <Item term="Constraints">
-        <span className="num">
-          airmass ≤ {orNone(request.constraints.maxAirmass)} · {DARKNESS_LABELS[request.constraints.darkness]} · Moon ≥{" "}
-          {orNone(request.constraints.minMoonSeparationDeg, "°")} away · Moon lit ≤ {orNone(request.constraints.maxMoonIllumination)}
-        </span>
+        <span className="num">{constraintsText(request.constraints)}</span>
       </Item>
       <Item term="Filed">{request.submittedAt ? <Instant at={request.submittedAt} timeZone={timeZone} /> : "not yet"}</Item>
       <Item term="Through">{request.source === "api" ? "the API" : "the form"}</Item>
