@@ -82,6 +82,16 @@ function backgroundPlugin(bands: Band[], windows: { from: number; to: number }[]
   };
 }
 
+const HOUR_MS = 3_600_000;
+
+/** Tick instants on whole UT hours from `first` to `last`, one or two hours apart. */
+export function hourTicks(first: number, last: number): number[] {
+  const step = last - first > 8 * HOUR_MS ? 2 * HOUR_MS : HOUR_MS;
+  const ticks: number[] = [];
+  for (let t = Math.ceil(first / step) * step; t <= last; t += step) ticks.push(t);
+  return ticks;
+}
+
 export function AirmassChart({
   sky,
   windows,
@@ -152,7 +162,11 @@ export function AirmassChart({
           type: "linear",
           min: first,
           max: last,
-          ticks: { stepSize: 3_600_000, color: textColour, callback: (v) => clock(Number(v)), maxRotation: 0, autoSkipPadding: 8 },
+          // Whole UT hours (every two on a long night): Chart.js's own spacing drifts off the hour.
+          afterBuildTicks: (axis) => {
+            axis.ticks = hourTicks(first, last).map((value) => ({ value }));
+          },
+          ticks: { color: textColour, callback: (v) => clock(Number(v)), maxRotation: 0, autoSkip: false },
           title: { display: true, text: "UT", color: textColour },
           grid: { color: "rgba(128, 128, 128, 0.15)" },
         },

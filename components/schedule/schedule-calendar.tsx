@@ -139,6 +139,8 @@ export function ScheduleCalendar({
             // Columns run noon to noon, so a whole night sits in one column.
             slotMinTime="12:00:00"
             slotMaxTime="36:00:00"
+            // A column is a night, named by the date it begins (its early hours fall on the next date).
+            dayHeaderContent={(arg) => `Night of ${arg.text}`}
             slotDuration="00:30:00"
             scrollTime="18:00:00"
             allDaySlot={false}
