@@ -14,7 +14,18 @@ const ACTIONS: Record<string, string> = {
   "block.create": "created",
   "block.update": "moved or changed",
   "block.import": "imported",
+  "block.override_create": "placed as an override",
+  "block.override_trim": "shortened for an override",
+  "block.override_split": "split for an override (this is the part before it)",
+  "block.override_remainder": "split off by an override (the part after it)",
 };
+
+/** "shortened for an override" → "shortened for the override of GRB 261202A". */
+function actionText(action: string, details: unknown): string {
+  const text = ACTIONS[action] ?? action;
+  const target = (details as { targetName?: unknown } | null)?.targetName;
+  return typeof target === "string" && action.startsWith("block.override_") ? text.replace("an override", `the override of ${target}`) : text;
+}
 
 export function BlockDetailPanel({ id, canEdit, onClose, onDeleted }: { id: string; canEdit: boolean; onClose: () => void; onDeleted: () => void }) {
   const { data, error, isLoading } = useSWR(`/api/v1/blocks/${id}`, (url: string) => fetchJson<{ block: BlockDetail }>(url));
@@ -68,7 +79,7 @@ export function BlockDetailPanel({ id, canEdit, onClose, onDeleted }: { id: stri
             <ol className="mt-1 space-y-1 text-xs">
               {block.history.map((h, i) => (
                 <li key={i}>
-                  <span className="num">{formatUt(new Date(h.at))} UT</span> — {ACTIONS[h.action] ?? h.action} by {h.actorName ?? "the system"}
+                  <span className="num">{formatUt(new Date(h.at))} UT</span> — {actionText(h.action, h.details)} by {h.actorName ?? "the system"}
                 </li>
               ))}
             </ol>

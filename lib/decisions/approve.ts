@@ -76,6 +76,8 @@ export async function approveRequest(db: Db, director: User, input: ApproveInput
         instrumentId: request.instrument_id,
         observerUserId: request.pi_user_id,
         notes: `Override for ${request.target_name}`,
+        actorUserId: director.id,
+        targetName: request.target_name,
       });
       await bookLedger(trx, director, request, splice, (end.getTime() - start.getTime()) / MINUTE);
 

@@ -6,6 +6,7 @@
  */
 import { sql } from "kysely";
 import type { Trx } from "@/db/index";
+import { writeAudit } from "@/lib/audit/queries";
 import { planSplice, type BlockChange, type SpliceBlock } from "./plan";
 
 export interface SpliceInput {
@@ -17,6 +18,9 @@ export interface SpliceInput {
   instrumentId: string | null;
   observerUserId: string | null;
   notes: string;
+  /** Who approved it, and what for: each changed block's history says so. */
+  actorUserId: string;
+  targetName: string;
 }
 
 export interface SplicedDisplacement {
@@ -72,18 +76,26 @@ export async function spliceOverride(trx: Trx, input: SpliceInput): Promise<Spli
   }));
   const plan = planSplice({ start: input.start.getTime(), end: input.end.getTime() }, blocks);
 
+  // The block's history (audit rows) says which override changed it, and who approved it.
+  const history = (entityId: string, action: string, details: Record<string, unknown>) =>
+    writeAudit(trx, { actorUserId: input.actorUserId, action, entity: "block", entityId, details: { requestId: input.requestId, targetName: input.targetName, ...details } });
+
   for (const change of plan.changes) {
     const row = byId.get(change.block.id);
     if (!row) continue;
     if (change.type === "remove") {
       await trx.deleteFrom("blocks").where("id", "=", row.id).execute();
+      await history(row.id, "block.override_remove", {});
     } else if (change.type === "trim-end") {
       await trx.updateTable("blocks").set({ ends_at: new Date(change.newEnd), updated_at: new Date() }).where("id", "=", row.id).execute();
+      await history(row.id, "block.override_trim", { endsAt: new Date(change.newEnd).toISOString() });
     } else if (change.type === "trim-start") {
       await trx.updateTable("blocks").set({ starts_at: new Date(change.newStart), updated_at: new Date() }).where("id", "=", row.id).execute();
+      await history(row.id, "block.override_trim", { startsAt: new Date(change.newStart).toISOString() });
     } else {
       await trx.updateTable("blocks").set({ ends_at: new Date(change.firstEnd), updated_at: new Date() }).where("id", "=", row.id).execute();
-      await trx
+      await history(row.id, "block.override_split", { endsAt: new Date(change.firstEnd).toISOString() });
+      const remainder = await trx
         .insertInto("blocks")
         .values({
           telescope_id: row.telescope_id,
@@ -95,7 +107,9 @@ export async function spliceOverride(trx: Trx, input: SpliceInput): Promise<Spli
           ends_at: row.ends_at,
           notes: row.notes,
         })
-        .execute();
+        .returning("id")
+        .executeTakeFirstOrThrow();
+      await history(remainder.id, "block.override_remainder", { splitFrom: row.id });
     }
   }
 
@@ -114,6 +128,7 @@ export async function spliceOverride(trx: Trx, input: SpliceInput): Promise<Spli
     })
     .returning("id")
     .executeTakeFirstOrThrow();
+  await history(tooBlock.id, "block.override_create", {});
 
   const displacements: SplicedDisplacement[] = [];
   const changeById = new Map(plan.changes.map((c) => [c.block.id, c.type]));
