@@ -6,7 +6,8 @@
 import { z } from "zod";
 import { idField, utInstantField } from "@/lib/validation/fields";
 
-const MAX_NOTE = 4000;
+// The note is also kept in the request's history (request_events.note, at most 2000 characters).
+const MAX_NOTE = 2000;
 
 export const approveDecisionSchema = z
   .object({
