@@ -5,10 +5,14 @@
  * weights.ts). Pure: the schedule, the windows and `now` are all inputs.
  *
  * No slot starts before now plus the telescope's setup time; with urgency `now` the
- * earliest slot therefore breaks into the block in progress at exactly that moment.
+ * earliest slot therefore breaks into the block in progress at exactly that moment. No
+ * slot ends after the target fades past the instrument's limit (the fading clock, as in
+ * the feasibility check): an override then would displace science for nothing.
  * Suggestions on one telescope that overlap a better one by more than half are dropped,
  * so the list offers real alternatives rather than the same slot shifted by a minute.
  */
+import { alreadyFainterText, fadeText } from "@/lib/requests/feasibility/fading";
+import { formatUt } from "@/lib/time/format";
 import { candidateSlots, MINUTE, setupMinutesFor } from "./candidates";
 import { weigh } from "./evaluate";
 import { explain } from "./explain";
@@ -31,12 +35,15 @@ function compare(a: Scored, b: Scored): number {
 
 export function findSlots(input: SlotFinderInput): SlotFinderResult {
   const durationMs = input.durationMinutes * MINUTE;
+  // A fade after the usable time ends changes nothing.
+  const fade = input.fade && input.fade.at < input.horizon.end ? input.fade : null;
+  const end = fade ? fade.at : input.horizon.end;
   const scored: Scored[] = [];
   let considered = 0;
   let windowsLongEnough = 0;
   for (const telescope of input.telescopes) {
     const setup = setupMinutesFor(telescope, input.interruptSetupMinutes);
-    const usable = { start: Math.max(input.horizon.start, input.now + setup * MINUTE), end: input.horizon.end };
+    const usable = { start: Math.max(input.horizon.start, input.now + setup * MINUTE), end };
     const candidates = candidateSlots(telescope, usable, input.durationMinutes);
     if (candidates.length > 0) windowsLongEnough++;
     for (const c of candidates) {
@@ -74,10 +81,11 @@ export function findSlots(input: SlotFinderInput): SlotFinderResult {
 
   let reason: string | null = null;
   if (suggestions.length === 0) {
-    reason =
-      windowsLongEnough === 0
-        ? `No observable window of ${input.durationMinutes} min is left on any acceptable telescope before the deadline.`
-        : "Every observable window long enough overlaps another override: no slot can be offered.";
+    if (fade?.alreadyFainter) reason = `${alreadyFainterText(fade)}: no slot can reach it, so none is offered.`;
+    else if (windowsLongEnough > 0) reason = "Every observable window long enough overlaps another override: no slot can be offered.";
+    else if (fade) reason = `No observable window of ${input.durationMinutes} min is left on any acceptable telescope before ${fadeText(fade)}; later slots cannot reach it.`;
+    else reason = `No observable window of ${input.durationMinutes} min is left on any acceptable telescope before the deadline.`;
   }
-  return { suggestions, considered, reason };
+  const note = fade && !fade.alreadyFainter ? `No slot is offered after ${formatUt(new Date(fade.at))} UT, when the target fades past ${fade.limit}: later slots cannot reach it.` : null;
+  return { suggestions, considered, reason, note };
 }

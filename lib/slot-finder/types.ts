@@ -3,6 +3,7 @@
  * minutes. Everything is plain data, so the finder is a pure function of its input.
  */
 import type { BlockKind, RequestUrgency } from "@/db/types";
+import type { FadeCut } from "@/lib/requests/feasibility/fading";
 
 /** An observable window on one telescope (every sky constraint holds inside it). */
 export interface FinderWindow {
@@ -46,6 +47,8 @@ export interface SlotFinderInput {
   urgency: RequestUrgency;
   /** The request's usable time: from its earliest start to the earlier of latest end and deadline. */
   horizon: { start: number; end: number };
+  /** Where the fading clock ends the usable time early: no slot ends after `fade.at` (a fade at or after `horizon.end` changes nothing). */
+  fade?: FadeCut | null;
   telescopes: FinderTelescope[];
   /** The consortium's minimum setup time for an interruption (consortium_settings). */
   interruptSetupMinutes: number;
@@ -86,4 +89,6 @@ export interface SlotFinderResult {
   considered: number;
   /** Why there is nothing to suggest, when there is nothing. */
   reason: string | null;
+  /** Why no later slot is offered, when the fading clock cut the usable time short. */
+  note: string | null;
 }

@@ -3,6 +3,11 @@
  * `now` is passed in), so the form's live preview, the submit check and the tests all run
  * the same code.
  *
+ * The horizon in which windows count runs from max(earliest start, now) to the earliest of
+ * the latest end, the deadline and the instant the target fades past the instrument's
+ * limit (the fading clock): a window after the fade cannot reach the target, so it neither
+ * makes the request feasible nor appears in the report.
+ *
  * Work plan, per telescope: the first CHART_NIGHTS nights one by one (each brings the
  * airmass curve for the chart), the rest in one range call. Telescopes sharing a site see
  * the same sky, so only the first telescope of a site pays for the curves.
@@ -10,7 +15,7 @@
 import { airmassKastenYoung, type NightPlan, nightOfInstant, nightsBetween, type Site } from "@/lib/sky";
 import { PLANNING_DISCLAIMER, planVisibility, round, roundOrNull, twilightOut, type VisibilityPlan, type VisibilityRequest } from "@/lib/visibility";
 import type { FeasibilityInput } from "../schemas";
-import { fadingSummary } from "./fading";
+import { fadingOf } from "./fading";
 import { visibilityRequest, visibilityTarget } from "./inputs";
 import type { FeasibilityReport, InstrumentRef, SiteSky, SkyNight, TelescopeFeasibility, TelescopeSky } from "./types";
 import { feasibilityNight, refusalReasons, telescopeVerdict, toSecond } from "./verdict";
@@ -58,7 +63,9 @@ export function computeFeasibility(
   { visibility = planVisibility }: ComputeOptions = {},
 ): FeasibilityReport {
   const horizonStart = Math.max(input.earliestStart.getTime(), now.getTime());
-  const horizonEnd = Math.min(input.latestEnd.getTime(), input.deadline.getTime());
+  const requestEnd = Math.min(input.latestEnd.getTime(), input.deadline.getTime());
+  const { fading, cut: fade } = fadingOf(input.target, instrument, horizonStart, requestEnd);
+  const horizonEnd = fade ? fade.at : requestEnd;
   const target = visibilityTarget(input.target);
   const skies = new Map<string, SiteSky>();
   const notes = new Set<string>();
@@ -113,14 +120,14 @@ export function computeFeasibility(
       durationMinutes: input.durationMinutes,
       horizonStart,
       horizonEnd,
+      fade,
     });
   });
 
-  const fading = fadingSummary(input.target, instrument, horizonStart);
-  if (fading?.fainterThanLimitAt && Date.parse(fading.fainterThanLimitAt) < horizonEnd) {
+  if (fading?.fainterThanLimitAt && Date.parse(fading.fainterThanLimitAt) < requestEnd) {
     notes.add(`The target is predicted to fade past the instrument's limit at ${fading.fainterThanLimitAt.slice(0, 16).replace("T", " ")} UT: windows after that will not reach it.`);
   }
-  const reasons = refusalReasons(results, input.durationMinutes);
+  const reasons = refusalReasons(results, input.durationMinutes, fade);
   return {
     computedAt: now.toISOString(),
     horizon: { start: new Date(horizonStart).toISOString(), end: new Date(Math.max(horizonEnd, horizonStart)).toISOString() },

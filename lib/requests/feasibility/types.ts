@@ -1,8 +1,8 @@
 /**
  * The feasibility report for a ToO request: per acceptable telescope, the observable
- * windows inside the request's horizon (from max(earliest start, now) to the earlier of
- * latest end and deadline) and a verdict; per site, the sky of the first nights for the
- * airmass charts; and the fading clock. Instants are ISO 8601 UTC strings (chart samples:
+ * windows inside the request's horizon (from max(earliest start, now) to the earliest of
+ * latest end, deadline and the fading clock's fade past the instrument's limit) and a
+ * verdict; per site, the sky of the first nights for the airmass charts; and the fading clock. Instants are ISO 8601 UTC strings (chart samples:
  * epoch milliseconds, in parallel arrays) so the report crosses the wire and the database unchanged.
  *
  * The zod schemas describe the report in the OpenAPI document; the types come from them.
@@ -93,7 +93,9 @@ export const fadingSummarySchema = z.object({
 export const feasibilityReportSchema = z
   .object({
     computedAt: instant,
-    horizon: z.object({ start: instant, end: instant }),
+    horizon: z.object({ start: instant, end: instant }).meta({
+      description: "The time in which windows count: from max(earliest start, now) to the earliest of latest end, deadline and the instant the target fades past the instrument's limit.",
+    }),
     durationMinutes: z.number(),
     verdict: z.enum(["feasible", "refused"]),
     reasons: z.array(z.string()).meta({ description: "Why it would be refused (empty when feasible); each names the telescope concerned." }),

@@ -3,11 +3,13 @@
  * request's horizon; a telescope is feasible when one clipped window is at least as long
  * as the time needed. Sun avoidance is a refusal, never a warning: a telescope on which
  * the target is inside the Sun's avoidance zone on every night is refused outright, and a
- * request that lists such a telescope cannot be filed.
+ * request that lists such a telescope cannot be filed. When the fading clock ends the
+ * horizon early, the reasons name the fade rather than the deadline.
  */
 import type { NightPlan, SunAvoidanceStatus } from "@/lib/sky";
 import { formatUt } from "@/lib/time/format";
 import { round, roundOrNull } from "@/lib/visibility";
+import { alreadyFainterText, type FadeCut, fadeText } from "./fading";
 import type { FeasibilityNight, FeasibilityWindow, TelescopeFeasibility, TelescopeVerdict } from "./types";
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
@@ -64,10 +66,13 @@ export interface VerdictInput {
   nights: FeasibilityNight[];
   durationMinutes: number;
   horizonStart: number;
+  /** Already cut by the fade, when there is one. */
   horizonEnd: number;
+  /** Where the fading clock ended the horizon before the latest end and the deadline. */
+  fade?: FadeCut | null;
 }
 
-export function telescopeVerdict({ telescope, nights, durationMinutes, horizonStart, horizonEnd }: VerdictInput): TelescopeFeasibility {
+export function telescopeVerdict({ telescope, nights, durationMinutes, horizonStart, horizonEnd, fade = null }: VerdictInput): TelescopeFeasibility {
   const sunAvoidance = sunSummary(nights);
   const windows = nights.flatMap((n) => n.windows);
   const longest = windows.reduce((m, w) => Math.max(m, w.durationMinutes), 0);
@@ -77,18 +82,27 @@ export function telescopeVerdict({ telescope, nights, durationMinutes, horizonSt
   if (sunAvoidance.status === "refused") {
     verdict = "sun_refused";
     reason = `Refused for sun avoidance on ${telescope.code}: ${sunAvoidance.reason.replace(/^Refused for sun avoidance: /, "")}`;
+  } else if (fade?.alreadyFainter) {
+    verdict = "no_window";
+    reason = `${alreadyFainterText(fade)}: no window on ${telescope.code} can reach it.`;
   } else if (horizonEnd - horizonStart < durationMinutes * 60_000) {
     verdict = "no_window";
-    reason =
-      horizonEnd <= horizonStart
+    const left = Math.max(0, Math.round((horizonEnd - horizonStart) / 60_000));
+    reason = fade
+      ? `Only ${left} min remain before ${fadeText(fade)}; the request needs ${durationMinutes} min.`
+      : horizonEnd <= horizonStart
         ? `The deadline (${formatUt(new Date(horizonEnd))} UT) has passed: there is no time left to observe.`
-        : `Only ${Math.max(0, Math.round((horizonEnd - horizonStart) / 60_000))} min remain before the deadline; the request needs ${durationMinutes} min.`;
+        : `Only ${left} min remain before the deadline; the request needs ${durationMinutes} min.`;
   } else if (firstSlot === null) {
     verdict = "no_window";
-    reason =
-      windows.length === 0
-        ? `No observable window on ${telescope.code} between ${formatUt(new Date(horizonStart))} UT and the deadline ${formatUt(new Date(horizonEnd))} UT.`
-        : `The longest observable window on ${telescope.code} before the deadline is ${Math.floor(longest)} min; the request needs ${durationMinutes} min.`;
+    const from = formatUt(new Date(horizonStart));
+    if (windows.length > 0) {
+      reason = `The longest observable window on ${telescope.code} before ${fade ? fadeText(fade) : "the deadline"} is ${Math.floor(longest)} min; the request needs ${durationMinutes} min.`;
+    } else if (fade) {
+      reason = `No observable window on ${telescope.code} between ${from} UT and ${formatUt(new Date(fade.at))} UT, when the target fades past ${fade.limit}.`;
+    } else {
+      reason = `No observable window on ${telescope.code} between ${from} UT and the deadline ${formatUt(new Date(horizonEnd))} UT.`;
+    }
   } else {
     verdict = "feasible";
     const airmass = firstSlot.bestAirmass === null ? "" : `, best airmass ${firstSlot.bestAirmass.toFixed(2)}`;
@@ -98,12 +112,15 @@ export function telescopeVerdict({ telescope, nights, durationMinutes, horizonSt
 }
 
 /** The request's reasons for refusal, or none when it may be filed. */
-export function refusalReasons(telescopes: TelescopeFeasibility[], durationMinutes: number): string[] {
+export function refusalReasons(telescopes: TelescopeFeasibility[], durationMinutes: number, fade: FadeCut | null = null): string[] {
   if (telescopes.length === 0) return ["Choose at least one acceptable telescope."];
   const reasons = telescopes.filter((t) => t.verdict === "sun_refused").map((t) => `${t.reason} Remove ${t.code} from the acceptable telescopes or change the window.`);
   const withoutWindow = telescopes.filter((t) => t.verdict === "no_window").map((t) => t.reason);
   if (!telescopes.some((t) => t.verdict === "feasible") && withoutWindow.length > 0) {
-    reasons.push(`No observable window of ${durationMinutes} min before the deadline on any acceptable telescope.`, ...withoutWindow);
+    const headline = fade?.alreadyFainter
+      ? `${alreadyFainterText(fade)}: no window on any acceptable telescope can reach it.`
+      : `No observable window of ${durationMinutes} min before ${fade ? fadeText(fade) : "the deadline"} on any acceptable telescope.`;
+    reasons.push(headline, ...withoutWindow);
   }
   return reasons;
 }

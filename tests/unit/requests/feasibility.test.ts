@@ -5,9 +5,11 @@ import { describe, expect, it } from "vitest";
 import { CHART_NIGHTS, computeFeasibility } from "@/lib/requests/feasibility/compute";
 import { visibilityRequest, visibilityTarget } from "@/lib/requests/feasibility/inputs";
 import { toSnapshot } from "@/lib/requests/feasibility/snapshot";
-import type { InstrumentRef, TelescopeSky } from "@/lib/requests/feasibility/types";
+import type { FeasibilityReport, InstrumentRef, TelescopeSky } from "@/lib/requests/feasibility/types";
 import { feasibilityInputSchema, type RequestFormValues } from "@/lib/requests/schemas";
+import { nextWindowOf } from "@/lib/review/order";
 import { formatDec, formatRa, sunPosition } from "@/lib/sky";
+import { formatUt } from "@/lib/time/format";
 import { computeVisibility } from "@/lib/visibility";
 
 const NOW = new Date("2027-03-10T15:00:00Z");
@@ -125,5 +127,98 @@ describe("computeFeasibility", () => {
     expect(windows.length).toBeGreaterThan(0);
     // The report clips windows to its horizon (from NOW on): the ends and best airmass agree.
     expect(clipped.map((w) => [w.end, w.bestAirmass])).toEqual(windows.filter((w) => w.end > NOW.getTime()).map((w) => [w.end, w.bestAirmass]));
+  });
+});
+
+describe("the fading clock in the verdict", () => {
+  // An ephemeris opposite the Sun whose own magnitudes cross CAM's limit (V 21) at `fadeAt`,
+  // a tenth of a magnitude an hour: the windows stay where they are, only the fade moves.
+  const fadingRows = (fadeAt: number) =>
+    Array.from({ length: 97 }, (_, i) => {
+      const time = NOW.getTime() - 12 * HOUR + i * HOUR;
+      return { time: new Date(time).toISOString(), ra: ((sun.raDeg + 180) % 360) + i * 0.05, dec: -30 + i * 0.02, magnitude: 21 + ((time - fadeAt) / HOUR) * 0.1 };
+    });
+  const fadingTarget = (fadeAt: number) => input({ kind: "ephemeris", ephemeris: fadingRows(fadeAt) });
+  const windowsOf = (report: FeasibilityReport) => report.telescopes.flatMap((t) => t.nights.flatMap((n) => n.windows));
+  // Without an instrument there is no fading clock: these are the target's windows.
+  const sky = computeFeasibility(fadingTarget(NOW.getTime()), [big], null, NOW);
+  const [tonight, tomorrow] = windowsOf(sky);
+  const fadeOf = (report: FeasibilityReport) => Date.parse(report.fading!.fainterThanLimitAt!);
+
+  it("has a long first window and more on the nights after (the ground the cases stand on)", () => {
+    expect(sky.verdict).toBe("feasible");
+    expect(tonight!.durationMinutes).toBeGreaterThan(180);
+    expect(Date.parse(tomorrow!.start)).toBeGreaterThan(Date.parse(tonight!.end));
+  });
+
+  it("refuses when the only windows long enough come after the fade, naming the fade time", () => {
+    // Fades 30 min into tonight's window: tomorrow's windows are long enough but too late.
+    const fadeAt = Date.parse(tonight!.start) + 30 * 60_000;
+    const report = computeFeasibility(fadingTarget(fadeAt), [big], camera, NOW);
+    const fade = fadeOf(report);
+    expect(Math.abs(fade - fadeAt)).toBeLessThan(2000);
+    const when = `${formatUt(new Date(Math.floor(fade / 1000) * 1000))} UT`;
+    expect(report.verdict).toBe("refused");
+    expect(report.telescopes[0]?.verdict).toBe("no_window");
+    expect(report.telescopes[0]?.firstSlot).toBeNull();
+    expect(report.telescopes[0]?.reason).toBe(`The longest observable window on BIG before the target fades past CAM's limit V 21.0 at ${when} is 30 min; the request needs 60 min.`);
+    expect(report.reasons[0]).toBe(`No observable window of 60 min before the target fades past CAM's limit V 21.0 at ${when} on any acceptable telescope.`);
+    expect(report.reasons.join(" ")).not.toMatch(/deadline/);
+    for (const w of windowsOf(report)) expect(Date.parse(w.end)).toBeLessThanOrEqual(fade);
+    expect(Date.parse(report.horizon.end)).toBeLessThanOrEqual(fade);
+    expect(report.notes.some((n) => n.startsWith("The target is predicted to fade past the instrument's limit at"))).toBe(true);
+
+    // Faded before tonight's window even opens: no window at all, and the reason says until when.
+    const early = computeFeasibility(fadingTarget(Date.parse(tonight!.start) - HOUR), [big], camera, NOW);
+    expect(early.verdict).toBe("refused");
+    expect(windowsOf(early)).toEqual([]);
+    expect(early.telescopes[0]?.reason).toMatch(/^No observable window on BIG between 2027-03-10 15:00 UT and \d{4}-\d\d-\d\d \d\d:\d\d UT, when the target fades past CAM's limit V 21\.0\.$/);
+  });
+
+  it("accepts a window before the fade, cut at the fade, and keeps no window after it (so the director's queue shows none)", () => {
+    const fadeAt = Date.parse(tonight!.start) + 2 * HOUR;
+    const report = computeFeasibility(fadingTarget(fadeAt), [big], camera, NOW);
+    const fade = fadeOf(report);
+    expect(report.verdict).toBe("feasible");
+    const first = report.telescopes[0]!.firstSlot!;
+    expect(first.start).toBe(tonight!.start);
+    expect(Date.parse(first.end)).toBeLessThanOrEqual(fade);
+    expect(Date.parse(first.end)).toBeGreaterThan(fade - 2000);
+    expect(report.telescopes[0]?.reason).toMatch(/^First window long enough on BIG: /);
+    for (const w of windowsOf(report)) expect(Date.parse(w.end)).toBeLessThanOrEqual(fade);
+    expect(Date.parse(report.horizon.end)).toBe(Math.floor(fade / 1000) * 1000);
+    // The queue's "next window" reads the stored snapshot: past the fade there is none.
+    const snapshot = toSnapshot(report);
+    expect(nextWindowOf(snapshot, NOW.getTime(), 60)?.start).toBe(Date.parse(tonight!.start));
+    expect(nextWindowOf(snapshot, fade - 30 * 60_000, 60)).toBeNull();
+  });
+
+  it("refuses on every telescope, plainly, a target already fainter than the limit at the start", () => {
+    const rows = Array.from({ length: 97 }, (_, i) => ({
+      time: new Date(NOW.getTime() - 12 * HOUR + i * HOUR).toISOString(),
+      ra: ((sun.raDeg + 180) % 360) + i * 0.05,
+      dec: -30 + i * 0.02,
+      rAu: 1.1 + i * 0.004,
+      deltaAu: 0.2 + i * 0.006,
+    }));
+    const report = computeFeasibility(input({ kind: "ephemeris", ephemeris: rows, hMag: "26", gSlope: "" }), [big, small], camera, NOW);
+    expect(report.fading?.alreadyFainter).toBe(true);
+    const predicted = report.fading!.magnitudeAtStart!.toFixed(1);
+    expect(Number(predicted)).toBeGreaterThan(21);
+    expect(report.verdict).toBe("refused");
+    expect(report.telescopes.map((t) => [t.verdict, t.reason])).toEqual([
+      ["no_window", `The target is already fainter than CAM's limit V 21.0 (predicted V ${predicted}): no window on BIG can reach it.`],
+      ["no_window", `The target is already fainter than CAM's limit V 21.0 (predicted V ${predicted}): no window on SML can reach it.`],
+    ]);
+    expect(report.reasons[0]).toBe(`The target is already fainter than CAM's limit V 21.0 (predicted V ${predicted}): no window on any acceptable telescope can reach it.`);
+    expect(windowsOf(report)).toEqual([]);
+    expect(report.telescopes.every((t) => t.firstSlot === null)).toBe(true);
+  });
+
+  it("changes nothing when the target fades only after the deadline", () => {
+    const report = computeFeasibility(fadingTarget(NOW.getTime() + 80 * HOUR), [big], camera, NOW);
+    expect(report.verdict).toBe("feasible");
+    expect(windowsOf(report)).toEqual(windowsOf(sky));
+    expect(report.horizon.end).toBe(sky.horizon.end);
   });
 });

@@ -113,6 +113,30 @@ describe("the slot finder on schedules where the right answer is known", () => {
     expect(result.suggestions.map((s) => iso(s.start))).toEqual(["20:00", "20:30"]);
   });
 
+  it("offers no slot that ends after the target fades past the instrument's limit, and says why", () => {
+    const fade = { at: t("23:00"), alreadyFainter: false, limit: "CAM's limit V 21.0", magnitudeAtStart: 20.2 };
+    const result = findSlots(input([scope("AQ41", []), scope("SO25", [block("SCI", t("20:00"), t("04:00", 11), 2)])], { fade }));
+    expect(result.suggestions.length).toBeGreaterThan(0);
+    for (const s of result.suggestions) expect(s.end).toBeLessThanOrEqual(fade.at);
+    expect(result.suggestions.map((s) => iso(s.end))).toContain("23:00");
+    expect(result.reason).toBeNull();
+    expect(result.note).toBe("No slot is offered after 2027-01-10 23:00 UT, when the target fades past CAM's limit V 21.0: later slots cannot reach it.");
+
+    // Faded before an hour of the window has passed: nothing, and the reason names the fade, not the deadline.
+    const late = findSlots(input([scope("AQ41", [])], { fade: { ...fade, at: t("20:45") } }));
+    expect(late.suggestions).toEqual([]);
+    expect(late.reason).toBe("No observable window of 60 min is left on any acceptable telescope before the target fades past CAM's limit V 21.0 at 2027-01-10 20:45 UT; later slots cannot reach it.");
+
+    const faint = findSlots(input([scope("AQ41", [])], { fade: { ...fade, at: t("12:00"), alreadyFainter: true, magnitudeAtStart: 22.34 } }));
+    expect(faint.suggestions).toEqual([]);
+    expect(faint.reason).toBe("The target is already fainter than CAM's limit V 21.0 (predicted V 22.3): no slot can reach it, so none is offered.");
+
+    // A fade after the usable time ends changes nothing.
+    const after = findSlots(input([scope("AQ41", [])], { fade: { ...fade, at: t("13:00", 12) } }));
+    expect(after.note).toBeNull();
+    expect(after.suggestions).toEqual(findSlots(input([scope("AQ41", [])])).suggestions);
+  });
+
   it("centres the slot on the best airmass when time is free and urgency allows", () => {
     // Airmass falls from 2.0 at 20:00 to 1.05 at 02:00 and rises again.
     const samples = [];
