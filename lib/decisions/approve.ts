@@ -10,7 +10,8 @@ import { writeAudit } from "@/lib/audit/queries";
 import { getCreditRatio } from "@/lib/ledger/policy";
 import { noticeBlockDisplaced, noticeDecisionMade, noticeTonightChanged } from "@/lib/notices/notify";
 import { isPastDeadline, lapseOverdueQuietly } from "@/lib/requests/lapse";
-import { localDate } from "@/lib/time/format";
+import { formatUt, localDate } from "@/lib/time/format";
+import type { FeasibilitySnapshot } from "@/lib/requests/feasibility/types";
 import { OverrideInTheWayError, spliceOverride, type SpliceResult } from "@/lib/splice/service";
 import { scheduleChanged } from "@/lib/schedule/after-write";
 import type { User } from "@/lib/users/queries";
@@ -39,6 +40,19 @@ function isConstraint(error: unknown, code: string): boolean {
   return (error as { code?: string } | null)?.code === code;
 }
 
+/** A slot ending after the target fades past the instrument's limit (the check stored at filing) cannot reach it. */
+function refuseAfterFade(feasibility: FeasibilitySnapshot | null, end: Date): void {
+  const fading = feasibility?.fading;
+  if (!fading) return;
+  if (fading.alreadyFainter) throw new DecisionError(`The target was already fainter than ${fading.instrument}'s limit V ${fading.limitingMagnitude.toFixed(1)} when the request was filed: no slot can reach it.`, 409);
+  if (fading.fainterThanLimitAt && end.getTime() > Date.parse(fading.fainterThanLimitAt)) {
+    throw new DecisionError(
+      `The target is predicted to fade past ${fading.instrument}'s limit V ${fading.limitingMagnitude.toFixed(1)} at ${formatUt(new Date(fading.fainterThanLimitAt))} UT: choose a slot that ends by then. Nothing was changed.`,
+      409,
+    );
+  }
+}
+
 /** `now` decides whether the deadline has passed (tests pass their own clock). */
 export async function approveRequest(db: Db, director: User, input: ApproveInput, now: Date = new Date()): Promise<ApproveResult> {
   const start = wholeMinute(input.start);
@@ -62,6 +76,7 @@ export async function approveRequest(db: Db, director: User, input: ApproveInput
       // Before the minute job has lapsed it: refuse all the same.
       if (isPastDeadline(request.deadline, now)) throw new DeadlinePassedError(request.deadline ?? now);
       if (!request.program_id || !request.semester_id || !request.partner_id) throw new DecisionError("The request has no program to charge.", 400);
+      refuseAfterFade(request.feasibility as FeasibilitySnapshot | null, end);
       const acceptable = await trx.selectFrom("too_request_telescopes").select("telescope_id").where("request_id", "=", request.id).execute();
       if (!acceptable.some((a) => a.telescope_id === input.telescopeId)) throw new DecisionError("The PI did not accept that telescope for this request.", 400);
       const telescope = await loadTelescopeSite(trx, input.telescopeId);

@@ -16,6 +16,7 @@ export async function lockRequestForDecision(trx: Trx, requestId: string) {
       "r.duration_minutes",
       "r.urgency",
       "r.deadline",
+      "r.feasibility",
       "pi.name as pi_name",
       "pi.email as pi_email",
       "p.code as program_code",

@@ -40,12 +40,14 @@ const TIER: Record<RequestUrgency, number> = { now: 0, tonight: 1, within_days: 
 export function nextWindowOf(snapshot: FeasibilitySnapshot | null, now: number, durationMinutes: number | null): NextWindow | null {
   if (!snapshot) return null;
   const need = (durationMinutes ?? 0) * 60_000;
+  // Checks stored before windows were cut at the fading clock may still hold later ones.
+  const fade = snapshot.fading?.alreadyFainter ? -Infinity : snapshot.fading?.fainterThanLimitAt ? Date.parse(snapshot.fading.fainterThanLimitAt) : Infinity;
   let best: NextWindow | null = null;
   for (const telescope of snapshot.telescopes) {
     for (const night of telescope.nights) {
       for (const w of night.windows) {
         const start = Date.parse(w.start);
-        const end = Date.parse(w.end);
+        const end = Math.min(Date.parse(w.end), fade);
         if (end - Math.max(start, now) < need || end <= now) continue;
         if (!best || Math.max(start, now) < Math.max(best.start, now)) best = { telescopeCode: telescope.code, start, end, bestAirmass: w.bestAirmass };
       }
@@ -56,7 +58,12 @@ export function nextWindowOf(snapshot: FeasibilitySnapshot | null, now: number, 
 
 export function feasibilitySummary(snapshot: FeasibilitySnapshot | null, next: NextWindow | null, now: number): string {
   if (!snapshot) return "Feasibility was not checked when the request was filed.";
-  if (!next) return "No observable window long enough is left before the deadline.";
+  if (!next) {
+    const fading = snapshot.fading;
+    if (fading?.alreadyFainter) return "The target was already fainter than the instrument's limit when the request was filed.";
+    if (fading?.fainterThanLimitAt && Date.parse(fading.fainterThanLimitAt) <= now) return `The target has faded past the instrument's limit (predicted at ${formatUt(new Date(fading.fainterThanLimitAt))} UT).`;
+    return "No observable window long enough is left before the deadline.";
+  }
   const airmass = next.bestAirmass === null ? "" : `, best airmass ${next.bestAirmass.toFixed(2)}`;
   if (next.start <= now) return `Observable now on ${next.telescopeCode} until ${formatUt(new Date(next.end)).slice(11)} UT${airmass}.`;
   return `Next window on ${next.telescopeCode} in ${formatLead((next.start - now) / 60_000)} (${formatUt(new Date(next.start))} UT${airmass}).`;

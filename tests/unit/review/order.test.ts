@@ -79,4 +79,26 @@ describe("the review queue", () => {
     expect(feasibilitySummary(snapshot([[-5, -1, 1.5]]), null, NOW)).toBe("No observable window long enough is left before the deadline.");
     expect(feasibilitySummary(null, null, NOW)).toBe("Feasibility was not checked when the request was filed.");
   });
+
+  it("ignores stored windows after the target fades past the instrument's limit, and says why none is left", () => {
+    const fading = (at: string | null, alreadyFainter = false) => ({
+      source: "H-G" as const,
+      instrument: "CAM",
+      limitingMagnitude: 21,
+      magnitudeAtStart: 20,
+      fainterThanLimitAt: at,
+      alreadyFainter,
+      coverageEnd: h(96),
+      reason: "",
+    });
+    // Filed before windows were cut at the fade: the 20–26 h window is still stored.
+    const s = { ...snapshot([[2, 2.5, 1.4], [20, 26, 1.2]]), fading: fading(h(21)) };
+    expect(nextWindowOf(s, NOW, 60)).toMatchObject({ start: Date.parse(h(20)), end: Date.parse(h(21)) });
+    expect(nextWindowOf(s, NOW, 90)).toBeNull();
+    const later = NOW + 22 * 3_600_000;
+    expect(feasibilitySummary(s, nextWindowOf(s, later, 60), later)).toBe("The target has faded past the instrument's limit (predicted at 2027-01-11 09:00 UT).");
+    const faint = { ...snapshot([[2, 6, 1.2]]), fading: fading(null, true) };
+    expect(nextWindowOf(faint, NOW, 60)).toBeNull();
+    expect(feasibilitySummary(faint, null, NOW)).toBe("The target was already fainter than the instrument's limit when the request was filed.");
+  });
 });
