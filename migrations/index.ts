@@ -10,6 +10,7 @@ import * as requests from "./2026-12-01-0004-requests";
 import * as decisionsLedger from "./2026-12-01-0005-decisions-ledger";
 import * as outcomeNotice from "./2026-12-01-0006-outcome-notice";
 import * as requestLapse from "./2026-12-01-0007-request-lapse";
+import * as semestersNoOverlap from "./2026-12-01-0008-semesters-no-overlap";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01-0001-foundation": foundation,
@@ -19,4 +20,5 @@ export const migrations: Record<string, Migration> = {
   "2026-12-01-0005-decisions-ledger": decisionsLedger,
   "2026-12-01-0006-outcome-notice": outcomeNotice,
   "2026-12-01-0007-request-lapse": requestLapse,
+  "2026-12-01-0008-semesters-no-overlap": semestersNoOverlap,
 };

@@ -2,8 +2,10 @@
 
 /**
  * Scheduling a payback block for a program that is owed time: the telescope and the
- * slot in UT. The server refuses overlaps (naming the block in the way) and any block
- * longer than what is owed; the message says so and nothing is saved.
+ * slot in UT. The server refuses overlaps (naming the block in the way), any block longer
+ * than what is owed, and any block not wholly between sunset and sunrise of one night at
+ * the telescope's site (beside the start or end, naming that night's sunset and sunrise);
+ * the message says so and nothing is saved.
  */
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";

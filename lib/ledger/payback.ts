@@ -1,7 +1,8 @@
 /**
  * Scheduling a payback block, in one transaction: the program's row is locked (so two
  * paybacks for one program are booked one after the other and can never together repay
- * more than is owed), the block of kind `payback` is inserted (the exclusion constraint
+ * more than is owed), the block must lie in the dark part of one night at the telescope's
+ * site (night-window.ts), the block of kind `payback` is inserted (the exclusion constraint
  * refuses overlaps), a `repay` entry goes on the ledger, a schedule change is logged for
  * tonight's queue, the audit row is written and the observer is told.
  */
@@ -9,18 +10,27 @@ import type { Db } from "@/db/index";
 import { writeAudit } from "@/lib/audit/queries";
 import { UserFacingError } from "@/lib/actions/result";
 import { RecordNotFoundError } from "@/lib/actions/domain-errors";
-import { loadTelescopeSite } from "@/lib/decisions/context";
 import { noticePaybackScheduled } from "@/lib/notices/notify";
 import { findOverlappingBlocks } from "@/lib/schedule/queries";
 import { BlockConflictError, isOverlapViolation } from "@/lib/schedule/service";
 import { formatDuration } from "@/lib/time/format";
 import type { User } from "@/lib/users/queries";
 import { hours } from "./balances";
-import { findOwedMinutes } from "./queries";
+import { paybackNightRefusal, type NightRefusal, type PaybackTimeField } from "./night-window";
+import { findOwedMinutes, findPaybackTelescope } from "./queries";
 import type { PaybackInput } from "./schemas";
 import { scheduleChanged } from "@/lib/schedule/after-write";
 
 export class PaybackRefusedError extends UserFacingError {}
+
+/** The block is not wholly in the dark part of one night: shown beside the start and/or end. */
+export class PaybackOutsideNightError extends PaybackRefusedError {
+  readonly fields: PaybackTimeField[];
+  constructor(refusal: NightRefusal) {
+    super(refusal.message);
+    this.fields = refusal.fields;
+  }
+}
 
 export interface PaybackResult {
   blockId: string;
@@ -44,8 +54,10 @@ export async function schedulePayback(db: Db, actor: Pick<User, "id" | "name" | 
     return await db.transaction().execute(async (trx) => {
       const program = await trx.selectFrom("programs").select(["id", "code", "title", "semester_id", "partner_id"]).where("id", "=", input.programId).forUpdate().executeTakeFirst();
       if (!program) throw new RecordNotFoundError("program");
-      const telescope = await loadTelescopeSite(trx, input.telescopeId);
+      const telescope = await findPaybackTelescope(trx, input.telescopeId);
       if (!telescope) throw new RecordNotFoundError("telescope");
+      const outsideNight = paybackNightRefusal(telescope.site, start, end);
+      if (outsideNight) throw new PaybackOutsideNightError(outsideNight);
       const owed = await findOwedMinutes(trx, program.id, program.semester_id);
       if (owed <= SLACK) throw new PaybackRefusedError(`${program.code} is owed nothing on the ledger: there is no time to repay.`);
       if (minutes > owed + SLACK) {
@@ -102,7 +114,7 @@ export async function schedulePayback(db: Db, actor: Pick<User, "id" | "name" | 
           programCode: program.code,
           programTitle: program.title,
           telescope: { code: telescope.code, name: telescope.name },
-          site: { code: telescope.site_code, name: telescope.site_name, timeZone: telescope.time_zone },
+          site: { code: telescope.site.code, name: telescope.site.name, timeZone: telescope.site.timeZone },
           startsAt: start,
           endsAt: end,
           minutes,

@@ -99,3 +99,28 @@ export async function listLedgerFilterOptions(db: Db): Promise<{ semesters: Ledg
     partners: partners.map((p) => ({ id: p.id, code: p.code, label: `${p.code} — ${p.name}` })),
   };
 }
+
+export interface PaybackTelescope {
+  id: string;
+  code: string;
+  name: string;
+  site: { code: string; name: string; timeZone: string; latitudeDeg: number; longitudeDeg: number; heightM: number };
+}
+
+/** A telescope with its site: the notice names both, and the night check needs the site's place. */
+export async function findPaybackTelescope(db: Db | Trx, telescopeId: string): Promise<PaybackTelescope | undefined> {
+  const row = await db
+    .selectFrom("telescopes as t")
+    .innerJoin("sites as s", "s.id", "t.site_id")
+    .select(["t.id", "t.code", "t.name", "s.code as site_code", "s.name as site_name", "s.time_zone", "s.latitude_deg", "s.longitude_deg", "s.height_m"])
+    .where("t.id", "=", telescopeId)
+    .executeTakeFirst();
+  return (
+    row && {
+      id: row.id,
+      code: row.code,
+      name: row.name,
+      site: { code: row.site_code, name: row.site_name, timeZone: row.time_zone, latitudeDeg: row.latitude_deg, longitudeDeg: row.longitude_deg, heightM: row.height_m },
+    }
+  );
+}

@@ -55,6 +55,17 @@ export async function lockSemester(trx: Trx, id: string): Promise<Semester | und
   return locked && findSemesterById(trx, id);
 }
 
+/**
+ * The earliest other semester sharing time with [startsAt, endsAt). Plain comparisons, not
+ * a range, so that an end before the start finds nothing and the CHECK refuses it instead.
+ */
+export async function findOverlappingSemester(db: Db | Trx, startsAt: Date, endsAt: Date, exceptId?: string): Promise<Omit<Semester, "programCount"> | undefined> {
+  let q = db.selectFrom("semesters").select(["id", "code", "starts_at", "ends_at"]).where("starts_at", "<", endsAt).where("ends_at", ">", startsAt);
+  if (exceptId) q = q.where("id", "<>", exceptId);
+  const row = await q.orderBy("starts_at").limit(1).executeTakeFirst();
+  return row && { id: row.id, code: row.code, startsAt: row.starts_at, endsAt: row.ends_at };
+}
+
 /** Blocks of the semester's programs that begin before startsAt or end after endsAt. */
 export async function countBlocksOutside(trx: Trx, semesterId: string, startsAt: Date, endsAt: Date): Promise<{ early: number; late: number }> {
   const row = await trx

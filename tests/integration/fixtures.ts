@@ -2,7 +2,7 @@
  * Small, self-contained fixtures for integration tests: every call makes its own site,
  * telescope and program with unique codes, so tests never step on each other's rows.
  */
-import { randomUUID } from "node:crypto";
+import { createHash, randomUUID } from "node:crypto";
 import { getDb } from "@/db/index";
 import type { Role } from "@/db/types";
 import { hashToken } from "@/lib/api-tokens/queries";
@@ -35,15 +35,32 @@ export async function makeToken(userId: string, opts: { revoked?: boolean } = {}
   return token;
 }
 
-/** A partner, a 2027 first-half semester and a science program (code `PRG<code>`) led by `piId`. */
+const FIXTURE_SEMESTERS_FROM = Date.UTC(3000, 0, 1);
+
+/**
+ * Dates for a fixture semester. Semesters may not overlap (semesters_no_overlap) and the
+ * suite shares one database, so each fixture semester is one minute of its own after
+ * 3000-01-01, chosen by 32 bits of a hash of its code: two collide about as often as two
+ * random 8-hex codes do, and nothing reads a fixture semester's dates. Tests about
+ * semester dates give their own, before 3000.
+ */
+export function fixtureSemesterDates(code: string): { startsAt: Date; endsAt: Date } {
+  const slot = createHash("sha256").update(code).digest().readUInt32BE(0);
+  const startsAt = new Date(FIXTURE_SEMESTERS_FROM + slot * 60_000);
+  return { startsAt, endsAt: new Date(startsAt.getTime() + 60_000) };
+}
+
+/** A semester of its own (see fixtureSemesterDates) with the given code. */
+export async function makeSemester(code: string): Promise<{ id: string }> {
+  const { startsAt, endsAt } = fixtureSemesterDates(code);
+  return getDb().insertInto("semesters").values({ code, starts_at: startsAt, ends_at: endsAt }).returning("id").executeTakeFirstOrThrow();
+}
+
+/** A partner, a semester of its own and a science program (code `PRG<code>`) led by `piId`. */
 export async function makeProgram(code: string, piId: string, opts: { tooAllowed?: boolean } = {}): Promise<{ id: string }> {
   const db = getDb();
   const partner = await db.insertInto("partners").values({ code: `P${code}`, name: `Partner ${code}` }).returning("id").executeTakeFirstOrThrow();
-  const semester = await db
-    .insertInto("semesters")
-    .values({ code: `SEM${code}`, starts_at: new Date("2027-01-01T00:00:00Z"), ends_at: new Date("2027-07-01T00:00:00Z") })
-    .returning("id")
-    .executeTakeFirstOrThrow();
+  const semester = await makeSemester(`SEM${code}`);
   return db
     .insertInto("programs")
     .values({ code: `PRG${code}`, title: "Fixture program", semester_id: semester.id, partner_id: partner.id, pi_user_id: piId, rank: 2, allocated_hours: 10, category: "science", ...(opts.tooAllowed ? { too_allowed: true } : {}) })

@@ -5,7 +5,7 @@ import { getDb } from "@/db/index";
 import { runFormAction } from "@/lib/actions/form-action";
 import type { ActionResult } from "@/lib/actions/result";
 import { requireActionRole } from "@/lib/auth/session";
-import { schedulePayback } from "@/lib/ledger/payback";
+import { PaybackOutsideNightError, schedulePayback } from "@/lib/ledger/payback";
 import { paybackSchema } from "@/lib/ledger/schemas";
 import { BlockConflictError } from "@/lib/schedule/service";
 import { formatDuration } from "@/lib/time/format";
@@ -21,6 +21,7 @@ export async function schedulePaybackAction(input: unknown): Promise<ActionResul
       return { ok: true, message: `Payback block of ${formatDuration(result.minutes)} scheduled; still owed ${formatDuration(Math.max(0, result.owedAfterMinutes))}.` };
     } catch (error) {
       if (error instanceof BlockConflictError) return { ok: false, message: error.message, fieldErrors: { startsAt: "Overlaps another block." } };
+      if (error instanceof PaybackOutsideNightError) return { ok: false, message: error.message, fieldErrors: Object.fromEntries(error.fields.map((f) => [f, error.message])) };
       throw error;
     }
   });

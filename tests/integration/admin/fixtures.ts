@@ -11,7 +11,7 @@ import type { ProgramInput } from "@/lib/programs/schemas";
 import type { SemesterInput } from "@/lib/semesters/schemas";
 import type { SiteInput } from "@/lib/sites/schemas";
 import type { TelescopeInput } from "@/lib/telescopes/schemas";
-import { makeUser } from "../fixtures";
+import { fixtureSemesterDates, makeUser } from "../fixtures";
 
 export const uniqueCode = (prefix: string) => `${prefix}${randomUUID().slice(0, 8)}`;
 
@@ -48,8 +48,10 @@ export function instrumentInput(telescopeId: string, overrides: Partial<Instrume
   return { telescopeId, code: uniqueCode("I"), name: "Fixture camera", limitingMagnitude: 22.5, ...overrides };
 }
 
+/** A semester of its own (fixtureSemesterDates) unless the test gives dates. */
 export function semesterInput(overrides: Partial<SemesterInput> = {}): SemesterInput {
-  return { code: uniqueCode("SEM"), startsAt: new Date("2027-02-01T00:00:00Z"), endsAt: new Date("2027-08-01T00:00:00Z"), ...overrides };
+  const code = overrides.code ?? uniqueCode("SEM");
+  return { code, ...fixtureSemesterDates(code), ...overrides };
 }
 
 export function partnerInput(overrides: Partial<PartnerInput> = {}): PartnerInput {

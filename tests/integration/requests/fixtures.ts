@@ -8,7 +8,7 @@ import { randomUUID } from "node:crypto";
 import { getDb } from "@/db/index";
 import type { RequestFormValues } from "@/lib/requests/schemas";
 import { formatDec, formatRa, sunPosition } from "@/lib/sky";
-import { makeToken, makeUser } from "../fixtures";
+import { makeSemester, makeToken, makeUser } from "../fixtures";
 
 const unique = () => randomUUID().slice(0, 8);
 const HOUR = 3_600_000;
@@ -42,11 +42,7 @@ export async function makeRequestWorld(opts: { tooAllowed?: boolean } = {}): Pro
     .returning("id")
     .executeTakeFirstOrThrow();
   const partner = await db.insertInto("partners").values({ code: `RP${code}`, name: `Partner ${code}` }).returning("id").executeTakeFirstOrThrow();
-  const semester = await db
-    .insertInto("semesters")
-    .values({ code: `RSEM${code}`, starts_at: new Date("2026-01-01T00:00:00Z"), ends_at: new Date("2028-01-01T00:00:00Z") })
-    .returning("id")
-    .executeTakeFirstOrThrow();
+  const semester = await makeSemester(`RSEM${code}`);
   const program = await db
     .insertInto("programs")
     .values({

@@ -4,7 +4,7 @@
  */
 import { randomUUID } from "node:crypto";
 import { getDb } from "@/db/index";
-import { makeUser } from "../fixtures";
+import { makeSemester, makeUser } from "../fixtures";
 
 export async function makeImportWorld(timeZone = "America/Santiago") {
   const db = getDb();
@@ -27,11 +27,7 @@ export async function makeImportWorld(timeZone = "America/Santiago") {
     .returning(["id", "code"])
     .executeTakeFirstOrThrow();
   const partner = await db.insertInto("partners").values({ code: `IP${u}`, name: `Partner ${u}` }).returning("id").executeTakeFirstOrThrow();
-  const semester = await db
-    .insertInto("semesters")
-    .values({ code: `ISEM${u}`, starts_at: new Date("2027-01-01T00:00:00Z"), ends_at: new Date("2027-12-31T00:00:00Z") })
-    .returning("id")
-    .executeTakeFirstOrThrow();
+  const semester = await makeSemester(`ISEM${u}`);
   const program = (code: string, category: "science" | "engineering") =>
     db
       .insertInto("programs")
