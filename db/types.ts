@@ -152,7 +152,7 @@ export interface RateLimitsTable {
   expire: string | null;
 }
 
-export const NOTICE_EVENTS = ["request_submitted", "decision_made", "block_displaced", "tonight_changed", "payback_scheduled", "outcome_logged", "request_lapsed"] as const;
+export const NOTICE_EVENTS = ["request_submitted", "decision_made", "block_displaced", "tonight_changed", "payback_scheduled", "outcome_logged", "request_lapsed", "request_returned"] as const;
 export type NoticeEvent = (typeof NOTICE_EVENTS)[number];
 
 export const DELIVERY_STATUSES = ["queued", "sending", "retrying", "sent", "failed"] as const;

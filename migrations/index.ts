@@ -11,6 +11,7 @@ import * as decisionsLedger from "./2026-12-01-0005-decisions-ledger";
 import * as outcomeNotice from "./2026-12-01-0006-outcome-notice";
 import * as requestLapse from "./2026-12-01-0007-request-lapse";
 import * as semestersNoOverlap from "./2026-12-01-0008-semesters-no-overlap";
+import * as requestReturned from "./2026-12-01-0009-request-returned";
 
 export const migrations: Record<string, Migration> = {
   "2026-12-01-0001-foundation": foundation,
@@ -21,4 +22,5 @@ export const migrations: Record<string, Migration> = {
   "2026-12-01-0006-outcome-notice": outcomeNotice,
   "2026-12-01-0007-request-lapse": requestLapse,
   "2026-12-01-0008-semesters-no-overlap": semestersNoOverlap,
+  "2026-12-01-0009-request-returned": requestReturned,
 };

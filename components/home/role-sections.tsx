@@ -4,17 +4,20 @@ import { UrgencyBadge } from "@/components/review/urgency-badge";
 import { EmptyState } from "@/components/ui/empty-state";
 import { listOwedToObserver, type ObserverOwed } from "@/lib/ledger/owed";
 import { countConsortium, listProgramsForPi } from "@/lib/programs/queries";
+import { listPiAttention } from "@/lib/requests/attention";
 import { listBlocksForObserver, listBlocksOnTelescopes } from "@/lib/schedule/queries";
 import { listReviewQueue } from "@/lib/review/queue";
 import { listTelescopesForAssistant } from "@/lib/telescopes/queries";
 import { formatDuration, formatUt } from "@/lib/time/format";
 import { BlockList } from "./block-list";
+import { PiAttentionList } from "./pi-attention";
 import { HomeSection } from "./section";
 
 const HOUR = 3_600_000;
 
 export async function PiSection({ userId }: { userId: string }) {
-  const programs = await listProgramsForPi(getDb(), userId);
+  const now = new Date();
+  const [programs, attention] = await Promise.all([listProgramsForPi(getDb(), userId), listPiAttention(getDb(), userId, now)]);
   return (
     <HomeSection id="home-pi" title="Your programs and override requests">
       {programs.length ? (
@@ -31,7 +34,7 @@ export async function PiSection({ userId }: { userId: string }) {
       ) : (
         <EmptyState>You lead no programs this semester.</EmptyState>
       )}
-      <p className="mt-3 text-muted">No override requests need your attention.</p>
+      <PiAttentionList attention={attention} now={now} />
     </HomeSection>
   );
 }

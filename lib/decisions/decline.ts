@@ -1,16 +1,17 @@
 /**
  * Declining a request (a reason is required) or returning it to the PI for changes: the
  * request goes back to a draft with the director's note, and the PI can file it again.
+ * Either way the PI is told (in-app notice and e-mail) in the same transaction.
  */
 import type { Db } from "@/db/index";
 import { writeAudit } from "@/lib/audit/queries";
-import { noticeDecisionMade } from "@/lib/notices/notify";
+import { noticeDecisionMade, noticeRequestReturned } from "@/lib/notices/notify";
 import type { User } from "@/lib/users/queries";
+import { loadFirstSite } from "./context";
 import { DecisionError } from "./errors";
 import { lockRequestForDecision } from "./request-row";
 
 const OPEN = ["submitted", "in_review"];
-
 
 export async function declineRequest(db: Db, director: User, input: { requestId: string; reason: string }): Promise<void> {
   const reason = input.reason.trim();
@@ -24,14 +25,6 @@ export async function declineRequest(db: Db, director: User, input: { requestId:
     await trx.insertInto("request_events").values({ request_id: request.id, actor_user_id: director.id, from_state: request.state, to_state: "declined", note: reason }).execute();
     await trx.insertInto("request_decisions").values({ request_id: request.id, decision: "decline", note: reason, decided_by: director.id }).execute();
     await writeAudit(trx, { actorUserId: director.id, action: "request.decline", entity: "too_request", entityId: request.id, details: { reason } });
-    const site = await trx
-      .selectFrom("too_request_telescopes as rt")
-      .innerJoin("telescopes as t", "t.id", "rt.telescope_id")
-      .innerJoin("sites as s", "s.id", "t.site_id")
-      .select(["s.code", "s.name", "s.time_zone"])
-      .where("rt.request_id", "=", request.id)
-      .orderBy("t.code")
-      .executeTakeFirst();
     await noticeDecisionMade(trx, {
       requestId: request.id,
       piUserId: request.pi_user_id,
@@ -41,7 +34,7 @@ export async function declineRequest(db: Db, director: User, input: { requestId:
       reason,
       decidedBy: { name: director.name, email: director.email },
       decidedAt: new Date(),
-      site: { code: site?.code ?? "—", name: site?.name ?? "—", timeZone: site?.time_zone ?? "UTC" },
+      site: await loadFirstSite(trx, request.id),
       slot: null,
       displacedMinutes: 0,
     });
@@ -58,7 +51,23 @@ export async function returnRequest(db: Db, director: User, input: { requestId: 
     // Back to a draft: the PI edits and files again; the note stays visible on the request.
     await trx.updateTable("too_requests").set({ state: "draft", submitted_at: null, director_note: note, updated_at: new Date() }).where("id", "=", request.id).execute();
     await trx.insertInto("request_events").values({ request_id: request.id, actor_user_id: director.id, from_state: request.state, to_state: "draft", note }).execute();
-    await trx.insertInto("request_decisions").values({ request_id: request.id, decision: "return", note, decided_by: director.id }).execute();
+    const decision = await trx
+      .insertInto("request_decisions")
+      .values({ request_id: request.id, decision: "return", note, decided_by: director.id })
+      .returning(["id", "decided_at"])
+      .executeTakeFirstOrThrow();
     await writeAudit(trx, { actorUserId: director.id, action: "request.return", entity: "too_request", entityId: request.id, details: { note } });
+    await noticeRequestReturned(trx, {
+      returnId: decision.id,
+      requestId: request.id,
+      piUserId: request.pi_user_id,
+      targetName: request.target_name,
+      programCode: request.program_code ?? "ToO",
+      note,
+      returnedBy: { name: director.name, email: director.email },
+      returnedAt: decision.decided_at,
+      deadline: request.urgency === "within_days" ? request.deadline : null,
+      site: await loadFirstSite(trx, request.id),
+    });
   });
 }

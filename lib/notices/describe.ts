@@ -86,5 +86,13 @@ function describe(notice: NoticeOf): Omit<NoticeText, "link"> {
         body: `${lapseSentence(p)} It will not be scheduled. If ${p.targetName} is still worth observing, file a new request with a later deadline.`,
       };
     }
+    case "request_returned": {
+      const p = notice.payload;
+      const deadline = p.deadline ? ` Your deadline ${utAndLocal(p.deadline, p.site.timeZone)} still stands.` : "";
+      return {
+        title: `Your ToO request for ${p.targetName} was returned for changes`,
+        body: `It is a draft again and out of the review queue until you file it again.${deadline} ${p.returnedBy.name}: ${p.note}`,
+      };
+    }
   }
 }

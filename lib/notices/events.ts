@@ -1,5 +1,5 @@
 /**
- * The seven notice events and the facts each one carries. A payload is what the e-mail
+ * The eight notice events and the facts each one carries. A payload is what the e-mail
  * and the in-app notice are written from, so it holds names and numbers, not ids to look
  * up later: the worker renders exactly what was true when the change was committed.
  * Instants are Dates in code and ISO strings inside a queued job (`z.coerce.date()`
@@ -174,6 +174,24 @@ export const requestLapsedSchema = z.object({
   site: siteRefSchema,
 });
 
+/** To the PI: the director returned the request as a draft, saying what to change before it is filed again. */
+export const requestReturnedSchema = z.object({
+  /** The return decision: a request returned again after it was refiled is a new notice. */
+  returnId: z.uuid(),
+  requestId: z.uuid(),
+  piUserId: z.uuid(),
+  targetName: text(200),
+  programCode: text(40),
+  /** What the PI should change, in the director's words. */
+  note: text(4000),
+  returnedBy: personRefSchema,
+  returnedAt: instant,
+  /** Only for `within_days`: the request's deadline, which still stands. */
+  deadline: instant.nullable(),
+  /** The first acceptable telescope's site, whose local time is shown beside UT. */
+  site: siteRefSchema,
+});
+
 export const NOTICE_PAYLOAD_SCHEMAS = {
   request_submitted: requestSubmittedSchema,
   decision_made: decisionMadeSchema,
@@ -182,6 +200,7 @@ export const NOTICE_PAYLOAD_SCHEMAS = {
   payback_scheduled: paybackScheduledSchema,
   outcome_logged: outcomeLoggedSchema,
   request_lapsed: requestLapsedSchema,
+  request_returned: requestReturnedSchema,
 } as const satisfies Record<NoticeEvent, z.ZodType>;
 
 export type RequestSubmittedPayload = z.infer<typeof requestSubmittedSchema>;
@@ -191,6 +210,7 @@ export type TonightChangedPayload = z.infer<typeof tonightChangedSchema>;
 export type PaybackScheduledPayload = z.infer<typeof paybackScheduledSchema>;
 export type OutcomeLoggedPayload = z.infer<typeof outcomeLoggedSchema>;
 export type RequestLapsedPayload = z.infer<typeof requestLapsedSchema>;
+export type RequestReturnedPayload = z.infer<typeof requestReturnedSchema>;
 
 export interface NoticePayloads {
   request_submitted: RequestSubmittedPayload;
@@ -200,6 +220,7 @@ export interface NoticePayloads {
   payback_scheduled: PaybackScheduledPayload;
   outcome_logged: OutcomeLoggedPayload;
   request_lapsed: RequestLapsedPayload;
+  request_returned: RequestReturnedPayload;
 }
 
 /** One event with its payload, discriminated by `event`. */
@@ -214,6 +235,7 @@ export const NOTICE_EVENT_LABELS: Record<NoticeEvent, { label: string; roles: re
   payback_scheduled: { label: "A payback block is scheduled for me", roles: ["observer"] },
   outcome_logged: { label: "The night log records what happened to my ToO", roles: ["pi"] },
   request_lapsed: { label: "My ToO request lapsed at its deadline without a decision", roles: ["pi"] },
+  request_returned: { label: "My ToO request is returned to me for changes", roles: ["pi"] },
 };
 
 /** Parses a payload (from a queued job, say) back into its typed form with Dates. */
@@ -233,5 +255,7 @@ export function parseNotice(event: NoticeEvent, payload: unknown): NoticeOf {
       return { event, payload: outcomeLoggedSchema.parse(payload) };
     case "request_lapsed":
       return { event, payload: requestLapsedSchema.parse(payload) };
+    case "request_returned":
+      return { event, payload: requestReturnedSchema.parse(payload) };
   }
 }

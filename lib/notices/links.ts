@@ -21,6 +21,7 @@ export function noticeLink(notice: NoticeOf): string {
     case "decision_made":
     case "outcome_logged":
     case "request_lapsed":
+    case "request_returned":
       return `/requests/${notice.payload.requestId}`;
     case "block_displaced":
     case "payback_scheduled":

@@ -16,6 +16,7 @@ import type {
   OutcomeLoggedPayload,
   PaybackScheduledPayload,
   RequestLapsedPayload,
+  RequestReturnedPayload,
   RequestSubmittedPayload,
   TonightChangedPayload,
 } from "./events";
@@ -56,4 +57,9 @@ export async function noticeOutcomeLogged(trx: Trx, payload: OutcomeLoggedPayloa
 /** To the request's PI (`payload.piUserId`); a request lapses once, so one notice per request. */
 export async function noticeRequestLapsed(trx: Trx, payload: RequestLapsedPayload): Promise<EnqueueResult> {
   return enqueueNotice(trx, { event: "request_lapsed", payload, subjectId: payload.requestId, recipientIds: [payload.piUserId] });
+}
+
+/** To the request's PI (`payload.piUserId`); one notice per return (`returnId`), so a second return after refiling is told too. */
+export async function noticeRequestReturned(trx: Trx, payload: RequestReturnedPayload): Promise<EnqueueResult> {
+  return enqueueNotice(trx, { event: "request_returned", payload, subjectId: payload.returnId, recipientIds: [payload.piUserId] });
 }

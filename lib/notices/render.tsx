@@ -10,6 +10,7 @@ import { DecisionMadeEmail } from "@/emails/decision-made";
 import { OutcomeLoggedEmail } from "@/emails/outcome-logged";
 import { PaybackScheduledEmail } from "@/emails/payback-scheduled";
 import { RequestLapsedEmail } from "@/emails/request-lapsed";
+import { RequestReturnedEmail } from "@/emails/request-returned";
 import { RequestSubmittedEmail } from "@/emails/request-submitted";
 import { TonightChangedEmail } from "@/emails/tonight-changed";
 import { describeNotice } from "./describe";
@@ -50,20 +51,31 @@ function element(notice: NoticeOf, ctx: RenderContext): React.ReactElement {
       return <OutcomeLoggedEmail payload={notice.payload} {...ctx} />;
     case "request_lapsed":
       return <RequestLapsedEmail payload={notice.payload} {...ctx} />;
+    case "request_returned":
+      return <RequestReturnedEmail payload={notice.payload} {...ctx} />;
   }
 }
 
 /** Whom a reply reaches: the director named in the notice, or the night assistant who logged an outcome. */
 export function replyToFor(notice: NoticeOf): string | null {
-  const email =
-    notice.event === "decision_made"
-      ? notice.payload.decidedBy.email
-      : notice.event === "block_displaced" || notice.event === "payback_scheduled"
-        ? notice.payload.contact.email
-        : notice.event === "outcome_logged"
-          ? notice.payload.loggedBy.email
-          : "";
+  const email = replyAddress(notice);
   return email.includes("@") ? email : null;
+}
+
+function replyAddress(notice: NoticeOf): string {
+  switch (notice.event) {
+    case "decision_made":
+      return notice.payload.decidedBy.email;
+    case "request_returned":
+      return notice.payload.returnedBy.email;
+    case "block_displaced":
+    case "payback_scheduled":
+      return notice.payload.contact.email;
+    case "outcome_logged":
+      return notice.payload.loggedBy.email;
+    default:
+      return "";
+  }
 }
 
 export async function renderNoticeEmail(notice: NoticeOf, ctx: RenderContext): Promise<RenderedEmail> {

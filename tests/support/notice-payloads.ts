@@ -10,6 +10,7 @@ import type {
   OutcomeLoggedPayload,
   PaybackScheduledPayload,
   RequestLapsedPayload,
+  RequestReturnedPayload,
   RequestSubmittedPayload,
   SiteRef,
   TelescopeRef,
@@ -153,6 +154,22 @@ export function requestLapsed(over: Partial<RequestLapsedPayload> = {}): Request
     lapsedAt: at("2026-12-03T12:00:40Z"),
     requestedMinutes: 90,
     telescopes: [AQ41, AQ16],
+    site: SOUTH,
+    ...over,
+  };
+}
+
+export function requestReturned(over: Partial<RequestReturnedPayload> = {}): RequestReturnedPayload {
+  return {
+    returnId: randomUUID(),
+    requestId: randomUUID(),
+    piUserId: randomUUID(),
+    targetName: TARGET,
+    programCode: "CON-TOO-02",
+    note: "Ask for AQ16 as well: AQ41 is in engineering until 03:00 UT.\nAnd attach the finding chart you mention.",
+    returnedBy: DIRECTOR,
+    returnedAt: at("2026-12-01T22:31:00Z"),
+    deadline: at("2026-12-03T12:00:00Z"),
     site: SOUTH,
     ...over,
   };

@@ -3,8 +3,8 @@
 // the HTML and in the plain-text version.
 import { describe, expect, it } from "vitest";
 import { parseNotice, type NoticeOf } from "@/lib/notices/events";
-import { renderNoticeEmail, type RenderedEmail } from "@/lib/notices/render";
-import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestLapsed, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
+import { renderNoticeEmail, replyToFor, type RenderedEmail } from "@/lib/notices/render";
+import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestLapsed, requestReturned, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
 
 const APP = "https://desk.nightbreak.test";
 
@@ -202,6 +202,32 @@ describe("notice e-mails", () => {
     const unopened = await renderAs({ event: "request_lapsed", payload: requestLapsed({ fromState: "submitted", telescopes: [] }) });
     expectInText(unopened, "while the request was waiting in the review queue", "Was  waiting in the review queue");
     expect(unopened.text).not.toContain("Telescopes");
+  });
+
+  it("request returned: the director's note quoted, who returned it and when, the deadline, and a link to edit the request", async () => {
+    const p = requestReturned();
+    const email = await renderAs({ event: "request_returned", payload: p });
+    expectCommonParts(email);
+    expect(email.subject).toBe(`Your ToO request for ${TARGET} was returned for changes`);
+    expectInText(
+      email,
+      "The director sent your request back to you as a draft. What they ask you to change:",
+      "Ask for AQ16 as well: AQ41 is in engineering until 03:00 UT.",
+      "And attach the finding chart you mention.",
+      "until then it is not in the review queue and cannot be scheduled. Your deadline still stands.",
+      "Program  CON-TOO-02",
+      "Returned by  Tomasz Okafor-Lind <director@nightbreak.test>",
+      "Returned  2026-12-01 22:31 UT (2026-12-01 19:31 GMT-3)",
+      "Deadline  2026-12-03 12:00 UT (2026-12-03 09:00 GMT-3)",
+      "Edit the request",
+      `${APP}/requests/${p.requestId}`,
+    );
+    expectInHtml(email, "Ask for AQ16 as well: AQ41 is in engineering until 03:00 UT.", "2026-12-01 22:31 UT (2026-12-01 19:31 GMT-3)", `href="${APP}/requests/${p.requestId}"`);
+    expect(replyToFor({ event: "request_returned", payload: p })).toBe("director@nightbreak.test");
+
+    const noDeadline = await renderAs({ event: "request_returned", payload: requestReturned({ deadline: null }) });
+    expect(noDeadline.text).not.toContain("Deadline");
+    expect(noDeadline.text).not.toContain("Your deadline still stands");
   });
 
   it("renders the same bytes twice, so a retried send matches its idempotency key", async () => {

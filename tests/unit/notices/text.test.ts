@@ -5,7 +5,7 @@ import { describeNotice } from "@/lib/notices/describe";
 import { noticeKey } from "@/lib/notices/enqueue";
 import { appBaseUrl, noticeLink } from "@/lib/notices/links";
 import { localFakeUrl } from "@/lib/notices/outbox";
-import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestLapsed, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
+import { blockDisplaced, decisionMade, outcomeLogged, paybackScheduled, requestLapsed, requestReturned, requestSubmitted, TARGET, tonightChanged } from "../../support/notice-payloads";
 
 describe("in-app notice text", () => {
   it("names the facts in UT and local time and links to the page that answers it", () => {
@@ -30,6 +30,21 @@ describe("in-app notice text", () => {
     expect(noticeLink({ event: "outcome_logged", payload: outcome })).toBe(`/requests/${outcome.requestId}`);
     const lapsed = requestLapsed();
     expect(noticeLink({ event: "request_lapsed", payload: lapsed })).toBe(`/requests/${lapsed.requestId}`);
+    const returned = requestReturned();
+    expect(noticeLink({ event: "request_returned", payload: returned })).toBe(`/requests/${returned.requestId}`);
+  });
+
+  it("tells the PI their request came back as a draft, with the director's note and the deadline in UT and local time", () => {
+    const p = requestReturned();
+    expect(describeNotice({ event: "request_returned", payload: p })).toEqual({
+      title: `Your ToO request for ${TARGET} was returned for changes`,
+      body:
+        "It is a draft again and out of the review queue until you file it again. " +
+        "Your deadline 2026-12-03 12:00 UT (2026-12-03 09:00 GMT-3) still stands. " +
+        `Tomasz Okafor-Lind: ${p.note}`,
+      link: `/requests/${p.requestId}`,
+    });
+    expect(describeNotice({ event: "request_returned", payload: requestReturned({ deadline: null }) }).body).not.toContain("deadline");
   });
 
   it("tells the PI that the deadline passed before a decision, in UT and local time, and what they can do", () => {
