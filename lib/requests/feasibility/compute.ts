@@ -20,7 +20,8 @@ import { visibilityRequest, visibilityTarget } from "./inputs";
 import type { FeasibilityReport, InstrumentRef, SiteSky, SkyNight, TelescopeFeasibility, TelescopeSky } from "./types";
 import { feasibilityNight, refusalReasons, telescopeVerdict, toSecond } from "./verdict";
 
-export const CHART_NIGHTS = 3;
+/** A three-day window touches four nights (the one in progress and three more): chart them all. */
+export const CHART_NIGHTS = 4;
 /** The request schema keeps windows within 31 days; one spare night for time zones. */
 const MAX_NIGHTS = 33;
 

@@ -52,7 +52,10 @@ describe("computeFeasibility", () => {
     expect(report.reasons).toEqual([]);
     expect(report.telescopes.map((t) => t.verdict)).toEqual(["feasible", "feasible"]);
     expect(report.skies).toHaveLength(1);
-    expect(report.skies[0]?.nights).toHaveLength(CHART_NIGHTS);
+    // Every night of the window is charted but the one already over at NOW (daytime in Chile).
+    expect(report.telescopes[0]?.nights.map((n) => n.nightOf)).toEqual(["2027-03-09", "2027-03-10", "2027-03-11", "2027-03-12"]);
+    expect(report.skies[0]?.nights.map((n) => n.nightOf)).toEqual(["2027-03-10", "2027-03-11", "2027-03-12"]);
+    expect(report.skies[0]!.nights.length).toBeLessThanOrEqual(CHART_NIGHTS);
     for (const night of report.skies[0]!.nights) expect(night.samples.t.length).toBeGreaterThan(40);
     const windows = report.telescopes.flatMap((t) => t.nights.flatMap((n) => n.windows));
     for (const w of windows) {
@@ -220,5 +223,18 @@ describe("the fading clock in the verdict", () => {
     expect(report.verdict).toBe("feasible");
     expect(windowsOf(report)).toEqual(windowsOf(sky));
     expect(report.horizon.end).toBe(sky.horizon.end);
+  });
+
+  it("charts every night a three-day window touches when it opens during a night", () => {
+    const opensAtNight = new Date("2027-03-10T04:30:00Z"); // 01:30 in Chile: the night of the 9th is under way
+    const request = feasibilityInputSchema.parse({
+      ...input({ kind: "fixed", ...antiSolar }),
+      earliestStart: opensAtNight.toISOString(),
+      latestEnd: new Date(opensAtNight.getTime() + 72 * HOUR).toISOString(),
+      deadline: new Date(opensAtNight.getTime() + 72 * HOUR).toISOString(),
+      durationMinutes: "60",
+    });
+    const report = computeFeasibility(request, [big], null, opensAtNight);
+    expect(report.skies[0]?.nights.map((n) => n.nightOf)).toEqual(["2027-03-09", "2027-03-10", "2027-03-11", "2027-03-12"]);
   });
 });
