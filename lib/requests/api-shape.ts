@@ -7,6 +7,7 @@ import { ATTACHMENT_KINDS, DARKNESS_LEVELS, REQUEST_STATES, REQUEST_URGENCIES, T
 import type { Attachment } from "@/lib/attachments/queries";
 import { formatDec, formatRa } from "@/lib/sky";
 import type { RequestEvent, TooRequest } from "./types";
+import { feasibilityHorizonSchema } from "./feasibility/types";
 
 const instant = z.string().meta({ format: "date-time", example: "2026-12-02T03:30:00.000Z" });
 const windowSchema = z.object({ start: instant, end: instant, durationMinutes: z.number(), bestAirmass: z.number().nullable() });
@@ -68,7 +69,7 @@ export const apiRequestSchema = z
       .object({
         verdict: z.enum(["feasible", "refused"]),
         computedAt: instant,
-        horizon: z.object({ start: instant, end: instant }),
+        horizon: feasibilityHorizonSchema,
         reasons: z.array(z.string()),
         telescopes: z.array(
           z.object({

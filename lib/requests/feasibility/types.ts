@@ -90,12 +90,14 @@ export const fadingSummarySchema = z.object({
   curve: z.array(z.object({ t: z.number(), magnitude: z.number() })),
 });
 
+export const feasibilityHorizonSchema = z.object({ start: instant, end: instant }).meta({
+  description: "The time in which windows count: from max(earliest start, now) to the earliest of latest end, deadline and the instant the target fades past the instrument's limit.",
+});
+
 export const feasibilityReportSchema = z
   .object({
     computedAt: instant,
-    horizon: z.object({ start: instant, end: instant }).meta({
-      description: "The time in which windows count: from max(earliest start, now) to the earliest of latest end, deadline and the instant the target fades past the instrument's limit.",
-    }),
+    horizon: feasibilityHorizonSchema,
     durationMinutes: z.number(),
     verdict: z.enum(["feasible", "refused"]),
     reasons: z.array(z.string()).meta({ description: "Why it would be refused (empty when feasible); each names the telescope concerned." }),
