@@ -162,11 +162,11 @@ export function AirmassChart({
           type: "linear",
           min: first,
           max: last,
-          // Whole UT hours (every two on a long night): Chart.js's own spacing drifts off the hour.
+          // Whole UT hours (every two on a long night; Chart.js drops some evenly when narrow): its own spacing drifts off the hour.
           afterBuildTicks: (axis) => {
             axis.ticks = hourTicks(first, last).map((value) => ({ value }));
           },
-          ticks: { color: textColour, callback: (v) => clock(Number(v)), maxRotation: 0, autoSkip: false },
+          ticks: { color: textColour, callback: (v) => clock(Number(v)), maxRotation: 0, autoSkipPadding: 8 },
           title: { display: true, text: "UT", color: textColour },
           grid: { color: "rgba(128, 128, 128, 0.15)" },
         },

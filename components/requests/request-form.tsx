@@ -110,7 +110,7 @@ export function RequestForm({
 
   const errors = form.formState.errors;
   return (
-    <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+    <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
       <form onSubmit={onSubmit} noValidate aria-label="ToO request" className="flex flex-col gap-6 rounded-lg border border-line bg-raised p-4">
         <TargetSection form={form} programs={programs} attachEphemeris={(file) => uploads.upload(file, "ephemeris")} />
         <TelescopeSection form={form} telescopes={telescopes} instruments={instruments} />

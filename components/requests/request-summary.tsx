@@ -5,11 +5,12 @@ import { DARKNESS_LABELS, URGENCY_LABELS } from "@/lib/requests/labels";
 import type { TooRequest } from "@/lib/requests/types";
 import { formatDec, formatRa } from "@/lib/sky";
 
-function Item({ term, children }: { term: string; children: React.ReactNode }) {
+/** One field in its own cell; `wide` gives a whole row to a value that cannot wrap (a time range). */
+function Item({ term, wide = false, children }: { term: string; wide?: boolean; children: React.ReactNode }) {
   return (
-    <div className="flex flex-col gap-0.5">
+    <div className={wide ? "col-span-full flex min-w-0 flex-col gap-0.5" : "flex min-w-0 flex-col gap-0.5"}>
       <dt className="text-2xs font-semibold uppercase tracking-wide text-muted">{term}</dt>
-      <dd className="text-sm">{children}</dd>
+      <dd className="text-sm break-words">{children}</dd>
     </div>
   );
 }
@@ -31,7 +32,8 @@ export function RequestSummary({ request, timeZone }: { request: TooRequest; tim
   const t = request.target;
   const rows = t.ephemeris ?? [];
   return (
-    <dl className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
+    // As many columns of at least 15rem as the panel holds (it is narrower beside the feasibility).
+    <dl className="grid grid-cols-[repeat(auto-fill,minmax(min(100%,15rem),1fr))] gap-4">
       <Item term="Program">{request.programCode ? `${request.programCode} — ${request.programTitle}` : "—"}</Item>
       <Item term="PI">{request.piName}</Item>
       <Item term="Target">
@@ -49,24 +51,24 @@ export function RequestSummary({ request, timeZone }: { request: TooRequest; tim
       <Item term="Acceptable telescopes">{request.telescopes.map((s) => `${s.code} — ${s.name}`).join(", ") || "—"}</Item>
       <Item term="Instrument">{request.instrumentCode ?? "—"}</Item>
       <Item term="Time needed">{request.durationMinutes === null ? "—" : formatDuration(request.durationMinutes)}</Item>
-      <Item term="Window">
+      <Item term="Window" wide>
         {request.earliestStart && request.latestEnd ? <TimeRange start={request.earliestStart} end={request.latestEnd} timeZone={timeZone} /> : "—"}
       </Item>
-      <Item term="Deadline">{request.deadline ? <Instant at={request.deadline} timeZone={timeZone} /> : "—"}</Item>
+      <Item term="Deadline">{request.deadline ? <Instant at={request.deadline} timeZone={timeZone} stacked /> : "—"}</Item>
       <Item term="Urgency">{request.urgency ? URGENCY_LABELS[request.urgency] : "—"}</Item>
       <Item term="Constraints">
         <span className="num">{constraintsText(request.constraints)}</span>
       </Item>
-      <Item term="Filed">{request.submittedAt ? <Instant at={request.submittedAt} timeZone={timeZone} /> : "not yet"}</Item>
+      <Item term="Filed">{request.submittedAt ? <Instant at={request.submittedAt} timeZone={timeZone} stacked /> : "not yet"}</Item>
       <Item term="Through">{request.source === "api" ? "the API" : "the form"}</Item>
-      <div className="flex flex-col gap-0.5 sm:col-span-2 lg:col-span-3">
+      <div className="col-span-full flex min-w-0 flex-col gap-0.5">
         <dt className="text-2xs font-semibold uppercase tracking-wide text-muted">Scientific justification</dt>
-        <dd className="whitespace-pre-wrap text-sm">{request.justification || "—"}</dd>
+        <dd className="whitespace-pre-wrap break-words text-sm">{request.justification || "—"}</dd>
       </div>
       {request.directorNote && (
-        <div className="flex flex-col gap-0.5 sm:col-span-2 lg:col-span-3">
+        <div className="col-span-full flex min-w-0 flex-col gap-0.5">
           <dt className="text-2xs font-semibold uppercase tracking-wide text-muted">Director&apos;s note</dt>
-          <dd className="whitespace-pre-wrap text-sm">{request.directorNote}</dd>
+          <dd className="whitespace-pre-wrap break-words text-sm">{request.directorNote}</dd>
         </div>
       )}
     </dl>

@@ -47,7 +47,7 @@ function ImpactBody({ impact }: { impact: ImpactJson }) {
         )}
       </p>
       {impact.blocks.length > 0 && (
-        <div className="overflow-x-auto rounded-md border border-line">
+        <div className="scroll-cue overflow-x-auto rounded-md border border-line">
           <table className="w-full text-left text-xs">
             <caption className="sr-only">Blocks the slot would displace</caption>
             <thead className="bg-sunken text-2xs uppercase tracking-wide text-muted">

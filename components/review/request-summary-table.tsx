@@ -21,7 +21,7 @@ export interface RequestSummaryRow {
 /** One line per request for the director: urgency, target, state, PI, program, deadline (and feasibility). */
 export function RequestSummaryTable({ rows, caption, feasibility = false }: { rows: RequestSummaryRow[]; caption: string; feasibility?: boolean }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-raised">
+    <div className="scroll-cue overflow-x-auto rounded-lg border border-line bg-raised">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-sunken text-2xs uppercase tracking-wide text-muted">

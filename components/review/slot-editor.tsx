@@ -22,9 +22,10 @@ export function SlotEditor({
   };
   const minutes = (slot.end - slot.start) / 60_000;
   return (
-    <fieldset className="grid gap-3 sm:grid-cols-[minmax(0,1fr)_minmax(0,1fr)_minmax(0,1fr)]">
+    // The telescope on a row of its own: a date and time input needs half the panel's width.
+    <fieldset className="grid grid-cols-1 gap-3 sm:grid-cols-2">
       <legend className="sr-only">The slot to approve</legend>
-      <Field id="slot-telescope" label="Telescope">
+      <Field id="slot-telescope" label="Telescope" className="sm:col-span-2">
         <select id="slot-telescope" className={inputClass} value={slot.telescopeId} onChange={(e) => onChange({ ...slot, telescopeId: e.target.value })}>
           {telescopes.map((t) => (
             <option key={t.id} value={t.id}>

@@ -80,7 +80,7 @@ export function SlotGrid({ slot, telescope, onChange }: { slot: SlotChoice; tele
   };
 
   return (
-    <div className="schedule-calendar slot-grid rounded-md border border-line p-1" aria-label="The slot on its night's schedule (UT)">
+    <div role="group" className="schedule-calendar slot-grid rounded-md border border-line p-1" aria-label="The slot on its night's schedule, hours in UT">
       <FullCalendar
         ref={calendar}
         plugins={[timeGridPlugin, interactionPlugin, luxonPlugin]}

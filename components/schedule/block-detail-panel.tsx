@@ -54,11 +54,14 @@ export function BlockDetailPanel({ id, canEdit, onClose, onDeleted }: { id: stri
       {error && <Alert tone="error">{error.message}</Alert>}
       {block && (
         <>
-          <dl className="grid grid-cols-[6rem_1fr] gap-x-2 gap-y-1.5">
+          <dl className="grid grid-cols-[auto_minmax(0,1fr)] gap-x-3 gap-y-1.5 [&>dd]:break-words">
             <dt className="text-muted">Kind</dt>
             <dd><KindBadge kind={block.kind} /></dd>
             <dt className="text-muted">When</dt>
-            <dd><TimeRange start={new Date(block.startsAt)} end={new Date(block.endsAt)} timeZone={block.timeZone} /></dd>
+            {/* Fits on one line in the panel; should a long zone name not, it wraps rather than overflow. */}
+            <dd className="[&_.num]:whitespace-normal">
+              <TimeRange start={new Date(block.startsAt)} end={new Date(block.endsAt)} timeZone={block.timeZone} />
+            </dd>
             <dt className="text-muted">Telescope</dt>
             <dd>{block.telescopeName}, {block.siteName}</dd>
             <dt className="text-muted">PI</dt>

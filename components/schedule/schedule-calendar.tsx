@@ -124,7 +124,7 @@ export function ScheduleCalendar({
       </div>
       {error && <Alert tone="error">Could not load the schedule: {error.message} It will retry on its own.</Alert>}
       {message && <Alert tone={message.tone}>{message.text}</Alert>}
-      <div className="grid gap-4 lg:grid-cols-[1fr_20rem]">
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="schedule-calendar rounded-lg border border-line bg-raised p-2">
           <FullCalendar
             plugins={[timeGridPlugin, interactionPlugin, luxonPlugin]}

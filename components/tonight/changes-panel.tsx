@@ -103,33 +103,35 @@ export function AcknowledgementLog({ queue }: { queue: TonightQueue }) {
       {recent.length === 0 ? (
         <p className="mt-1 text-muted">No one has acknowledged a change on this telescope yet.</p>
       ) : (
-        <table className="mt-2 w-full text-left">
-          <caption className="sr-only">Recent acknowledgements, newest first</caption>
-          <thead className="text-sm text-muted">
-            <tr>
-              <th scope="col" className="py-1 pr-4 font-medium">
-                Night assistant
-              </th>
-              <th scope="col" className="py-1 pr-4 font-medium">
-                When
-              </th>
-              <th scope="col" className="py-1 font-medium">
-                Through change
-              </th>
-            </tr>
-          </thead>
-          <tbody>
-            {recent.map((a) => (
-              <tr key={`${a.at}-${a.userName}`} className="border-t border-line">
-                <td className="py-1 pr-4">{a.userName}</td>
-                <td className="py-1 pr-4">
-                  <span className="num">{localDay(a.at, queue.telescope.timeZone)}</span> <TimePair at={a.at} timeZone={queue.telescope.timeZone} />
-                </td>
-                <td className="num py-1">{a.throughChangeId}</td>
+        <div className="scroll-cue mt-2 overflow-x-auto">
+          <table className="w-full text-left">
+            <caption className="sr-only">Recent acknowledgements, newest first</caption>
+            <thead className="text-sm text-muted">
+              <tr>
+                <th scope="col" className="py-1 pr-4 font-medium">
+                  Night assistant
+                </th>
+                <th scope="col" className="py-1 pr-4 font-medium">
+                  When
+                </th>
+                <th scope="col" className="py-1 font-medium">
+                  Through change
+                </th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {recent.map((a) => (
+                <tr key={`${a.at}-${a.userName}`} className="border-t border-line">
+                  <td className="py-1 pr-4">{a.userName}</td>
+                  <td className="py-1 pr-4">
+                    <span className="num">{localDay(a.at, queue.telescope.timeZone)}</span> <TimePair at={a.at} timeZone={queue.telescope.timeZone} />
+                  </td>
+                  <td className="num py-1">{a.throughChangeId}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       )}
     </section>
   );

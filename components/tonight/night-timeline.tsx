@@ -22,6 +22,14 @@ export function timelineRange(queue: TonightQueue): { start: number; end: number
 }
 
 /**
+ * Hour labels a narrow strip has no room for (a phone): every second one below 48rem,
+ * every third below 24rem, so that "21:30" labels do not run into each other.
+ */
+function thinTicks(i: number): string {
+  return cn(i % 3 !== 0 && "@max-[24rem]:invisible", i % 2 !== 0 && "@min-[24rem]:@max-[48rem]:invisible");
+}
+
+/**
  * The local night as a strip: twilight bands stacked so they darken towards full night,
  * the blocks in a lane below, hour ticks in UT above and site time below, and a now-marker.
  * A picture of the queue below it (which carries the same facts as text).
@@ -46,11 +54,11 @@ export function NightTimeline({ queue }: { queue: TonightQueue }) {
         {sunset && sunrise ? ` from sunset at ${clockUt(sunset)} UT to sunrise at ${clockUt(sunrise)} UT` : ""}, with {queue.blocks.length} blocks. The queue below lists
         them.
       </figcaption>
-      <div aria-hidden="true" className="grid select-none grid-cols-[3rem_1fr] gap-x-2">
+      <div aria-hidden="true" className="@container grid select-none grid-cols-[3rem_1fr] gap-x-2">
         <span className="self-center text-xs text-muted">UT</span>
         <div className="relative h-6 text-sm">
-          {ticks.map((t) => (
-            <span key={t} className="num absolute -translate-x-1/2 text-muted" style={{ left: x(t) }}>
+          {ticks.map((t, i) => (
+            <span key={t} className={cn("num absolute -translate-x-1/2 text-muted", thinTicks(i))} style={{ left: x(t) }}>
               {clockUt(new Date(t).toISOString()).slice(0, 2)}
             </span>
           ))}
@@ -86,8 +94,8 @@ export function NightTimeline({ queue }: { queue: TonightQueue }) {
         </div>
         <span className="self-center text-xs text-muted">Local</span>
         <div className="relative h-6 text-sm">
-          {ticks.map((t) => (
-            <span key={t} className="num absolute -translate-x-1/2 text-muted" style={{ left: x(t) }}>
+          {ticks.map((t, i) => (
+            <span key={t} className={cn("num absolute -translate-x-1/2 text-muted", thinTicks(i))} style={{ left: x(t) }}>
               {clockLocal(new Date(t).toISOString(), tz).slice(0, 5)}
             </span>
           ))}

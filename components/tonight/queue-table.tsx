@@ -109,7 +109,7 @@ export function QueueTable({ queue, logExecution, onLogged }: { queue: TonightQu
     return <p className="rounded-md border border-dashed border-line px-4 py-6 text-center text-muted">No blocks are scheduled on {queue.telescope.code} this night.</p>;
   }
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-raised">
+    <div className="scroll-cue overflow-x-auto rounded-lg border border-line bg-raised">
       <table className="tn-queue w-full text-left" aria-label={`Queue on ${queue.telescope.code}, night of ${queue.night.nightOf}`}>
         <thead className="text-sm uppercase tracking-wide text-muted">
           <tr>

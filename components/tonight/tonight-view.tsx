@@ -42,10 +42,10 @@ export function TonightView({
   useEffect(() => setHydrated(true), []);
 
   return (
-    <div className="tonight grid gap-5" data-testid="tonight-sheet" data-hydrated={hydrated ? "true" : "false"}>
+    <div className="tonight grid grid-cols-1 gap-5" data-testid="tonight-sheet" data-hydrated={hydrated ? "true" : "false"}>
       <header className="flex flex-wrap items-start justify-between gap-4 border-b border-line pb-4">
         <div>
-          <h1 className="text-3xl font-semibold tracking-tight">
+          <h1 className="break-words text-3xl font-semibold tracking-tight">
             Tonight on {telescope.code} <span className="font-normal text-muted">· {telescope.name}</span>
           </h1>
           <p className="mt-1 text-lg">
@@ -82,7 +82,7 @@ export function TonightView({
 
       <ChangesPanel queue={queue} acknowledge={acknowledge} onAcknowledged={() => refresh()} />
 
-      <section aria-labelledby="tn-night-heading" className="grid gap-3">
+      <section aria-labelledby="tn-night-heading" className="grid grid-cols-1 gap-3">
         <h2 id="tn-night-heading" className="text-xl font-semibold">
           The night
         </h2>
@@ -90,7 +90,7 @@ export function TonightView({
         <NightTimeline queue={queue} />
       </section>
 
-      <section aria-labelledby="tn-queue-heading" className="grid gap-3">
+      <section aria-labelledby="tn-queue-heading" className="grid grid-cols-1 gap-3">
         <h2 id="tn-queue-heading" className="text-xl font-semibold">
           Queue <span className="text-base font-normal text-muted">in time order; times in UT and site time</span>
         </h2>

@@ -29,7 +29,7 @@ export default async function RequestsPage() {
       {requests.length === 0 ? (
         <EmptyState>You have not filed any override requests yet.</EmptyState>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-line bg-raised">
+        <div className="scroll-cue overflow-x-auto rounded-lg border border-line bg-raised">
           <table className="w-full text-left text-sm">
             <caption className="sr-only">Your requests</caption>
             <thead className="bg-sunken text-2xs uppercase tracking-wide text-muted">

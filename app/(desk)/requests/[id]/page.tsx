@@ -102,7 +102,7 @@ export default async function RequestPage({ params }: { params: Promise<{ id: st
           </Alert>
         </div>
       )}
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
         <div className="flex flex-col gap-6">
           <Section title="Request">
             <RequestSummary request={request} timeZone={timeZone} />

@@ -67,7 +67,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
           <StateBadge state={request.state} />
         </div>
       </PageHeader>
-      <div className="grid gap-6 xl:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+      <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
         <div className="flex flex-col gap-6">
           <section aria-label="Request" className="flex flex-col gap-3 rounded-lg border border-line bg-raised p-4">
             <h2 className="font-semibold">Request</h2>
