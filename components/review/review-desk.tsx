@@ -32,6 +32,7 @@ export function ReviewDesk({
   telescopes,
   suggestions,
   reason,
+  note,
   initialSlot,
   action,
 }: {
@@ -39,6 +40,8 @@ export function ReviewDesk({
   telescopes: CalendarTelescope[];
   suggestions: SlotSuggestion[];
   reason: string | null;
+  /** Why later slots are not offered (the target fades), when some are. */
+  note: string | null;
   initialSlot: SlotChoice;
   action: DecideAction;
 }) {
@@ -68,7 +71,7 @@ export function ReviewDesk({
   return (
     <div className="flex flex-col gap-6">
       <Panel title="Slot finder">
-        <SuggestionList suggestions={suggestions} reason={reason} timeZones={timeZones} chosen={slot} onUse={(s: SlotSuggestion) => choose({ telescopeId: s.telescopeId, start: s.start, end: s.end })} />
+        <SuggestionList suggestions={suggestions} reason={reason} note={note} timeZones={timeZones} chosen={slot} onUse={(s: SlotSuggestion) => choose({ telescopeId: s.telescopeId, start: s.start, end: s.end })} />
       </Panel>
       <Panel title="Chosen slot">
         <SlotEditor slot={slot} telescopes={telescopes} onChange={choose} />

@@ -10,37 +10,42 @@ import type { SlotSuggestion } from "@/lib/slot-finder/types";
 export function SuggestionList({
   suggestions,
   reason,
+  note,
   timeZones,
   chosen,
   onUse,
 }: {
   suggestions: SlotSuggestion[];
   reason: string | null;
+  note: string | null;
   timeZones: Record<string, string>;
   chosen: { telescopeId: string; start: number; end: number } | null;
   onUse: (s: SlotSuggestion) => void;
 }) {
   if (suggestions.length === 0) return <EmptyState>{reason ?? "No slot to suggest."}</EmptyState>;
   return (
-    <ol aria-label="Suggested slots" className="flex flex-col gap-2">
-      {suggestions.map((s, i) => {
-        const active = chosen?.telescopeId === s.telescopeId && chosen.start === s.start && chosen.end === s.end;
-        return (
-          <li key={`${s.telescopeId}-${s.start}`} className={cn("flex flex-wrap items-start gap-3 rounded-md border p-2", active ? "border-flare bg-flare-soft" : "border-line")}>
-            <span className="num w-6 shrink-0 pt-0.5 text-right text-muted" aria-hidden="true">{i + 1}.</span>
-            <div className="min-w-0 flex-1">
-              <p className="flex flex-wrap items-baseline gap-2">
-                <span className="num font-semibold">{s.telescopeCode}</span>
-                <TimeRange start={new Date(s.start)} end={new Date(s.end)} timeZone={timeZones[s.telescopeId] ?? "UTC"} />
-              </p>
-              <p className="text-xs">{s.explanation}</p>
-            </div>
-            <Button type="button" variant={active ? "flare" : "quiet"} aria-pressed={active} onClick={() => onUse(s)}>
-              Use suggestion {i + 1}
-            </Button>
-          </li>
-        );
-      })}
-    </ol>
+    <>
+      {note && <p className="text-xs text-muted">{note}</p>}
+      <ol aria-label="Suggested slots" className="flex flex-col gap-2">
+        {suggestions.map((s, i) => {
+          const active = chosen?.telescopeId === s.telescopeId && chosen.start === s.start && chosen.end === s.end;
+          return (
+            <li key={`${s.telescopeId}-${s.start}`} className={cn("flex flex-wrap items-start gap-3 rounded-md border p-2", active ? "border-flare bg-flare-soft" : "border-line")}>
+              <span className="num w-6 shrink-0 pt-0.5 text-right text-muted" aria-hidden="true">{i + 1}.</span>
+              <div className="min-w-0 flex-1">
+                <p className="flex flex-wrap items-baseline gap-2">
+                  <span className="num font-semibold">{s.telescopeCode}</span>
+                  <TimeRange start={new Date(s.start)} end={new Date(s.end)} timeZone={timeZones[s.telescopeId] ?? "UTC"} />
+                </p>
+                <p className="text-xs">{s.explanation}</p>
+              </div>
+              <Button type="button" variant={active ? "flare" : "quiet"} aria-pressed={active} onClick={() => onUse(s)}>
+                Use suggestion {i + 1}
+              </Button>
+            </li>
+          );
+        })}
+      </ol>
+    </>
   );
 }

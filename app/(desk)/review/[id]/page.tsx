@@ -79,7 +79,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
           </section>
         </div>
         {open && slots ? (
-          <ReviewDesk requestId={id} telescopes={acceptable} suggestions={slots.suggestions} reason={slots.reason} initialSlot={initialSlot} action={decideAction} />
+          <ReviewDesk requestId={id} telescopes={acceptable} suggestions={slots.suggestions} reason={slots.reason} note={slots.note} initialSlot={initialSlot} action={decideAction} />
         ) : (
           <DecisionSummary state={request.state} record={record} deadline={request.deadline} />
         )}
