@@ -23,7 +23,8 @@ test("an admin creates, corrects, edits and deletes a partner on its editor page
   await form.getByLabel("Code").fill(code);
   await form.getByLabel("Name").fill("A second partner with the same code");
   await form.getByRole("button", { name: "Create partner" }).click();
-  await expect(form.getByText(`A partner with the code ${code} already exists.`)).toBeVisible();
+  await expect(form.getByLabel("Code")).toHaveAccessibleDescription(new RegExp(`A partner with the code ${code} already exists\\.`));
+  await expect(form.getByLabel("Code")).toHaveAttribute("aria-invalid", "true");
   await expect(form.getByLabel("Name")).toHaveValue("A second partner with the same code");
 
   // Edit: the row's Edit link opens the form filled in.
