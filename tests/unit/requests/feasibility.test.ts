@@ -33,6 +33,17 @@ const camera: InstrumentRef = { id: "i-cam", telescopeId: "t-big", code: "CAM", 
 const sun = sunPosition(NOW.getTime());
 const antiSolar = { ra: formatRa((sun.raDeg + 180) % 360), dec: "-30:00:00" };
 
+/** Hourly rows opposite the Sun from 12 h before NOW, with r and Δ for H–G magnitudes. */
+function antiSolarEphemeris() {
+  return Array.from({ length: 97 }, (_, i) => ({
+    time: new Date(NOW.getTime() - 12 * HOUR + i * HOUR).toISOString(),
+    ra: ((sun.raDeg + 180) % 360) + i * 0.05,
+    dec: -30 + i * 0.02,
+    rAu: 1.1 + i * 0.004,
+    deltaAu: 0.2 + i * 0.006,
+  }));
+}
+
 function input(target: RequestFormValues["target"], overrides: Partial<Record<"latestEnd" | "deadline" | "durationMinutes", string>> = {}) {
   return feasibilityInputSchema.parse({
     target,
@@ -92,13 +103,7 @@ describe("computeFeasibility", () => {
   });
 
   it("plans a moving target from its ephemeris and runs the fading clock against the instrument", () => {
-    const rows = Array.from({ length: 97 }, (_, i) => ({
-      time: new Date(NOW.getTime() - 12 * HOUR + i * HOUR).toISOString(),
-      ra: ((sun.raDeg + 180) % 360) + i * 0.05,
-      dec: -30 + i * 0.02,
-      rAu: 1.1 + i * 0.004,
-      deltaAu: 0.2 + i * 0.006,
-    }));
+    const rows = antiSolarEphemeris();
     const report = computeFeasibility(input({ kind: "ephemeris", ephemeris: rows, hMag: "19", gSlope: "" }), [big], camera, NOW);
     expect(report.telescopes[0]?.verdict).toBe("feasible");
     expect(report.fading).toMatchObject({ source: "H-G", limitingMagnitude: 21, instrument: "CAM — Camera" });
@@ -197,13 +202,7 @@ describe("the fading clock in the verdict", () => {
   });
 
   it("refuses on every telescope, plainly, a target already fainter than the limit at the start", () => {
-    const rows = Array.from({ length: 97 }, (_, i) => ({
-      time: new Date(NOW.getTime() - 12 * HOUR + i * HOUR).toISOString(),
-      ra: ((sun.raDeg + 180) % 360) + i * 0.05,
-      dec: -30 + i * 0.02,
-      rAu: 1.1 + i * 0.004,
-      deltaAu: 0.2 + i * 0.006,
-    }));
+    const rows = antiSolarEphemeris();
     const report = computeFeasibility(input({ kind: "ephemeris", ephemeris: rows, hMag: "26", gSlope: "" }), [big, small], camera, NOW);
     expect(report.fading?.alreadyFainter).toBe(true);
     const predicted = report.fading!.magnitudeAtStart!.toFixed(1);
