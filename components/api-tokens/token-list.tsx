@@ -15,7 +15,7 @@ export function TokenList({ tokens, revoke }: { tokens: ApiToken[]; revoke: (inp
   if (tokens.length === 0) return <EmptyState>You have no API tokens.</EmptyState>;
   return (
     <div className="flex flex-col gap-2">
-      <div className="overflow-x-auto rounded-lg border border-line bg-raised">
+      <div className="scroll-cue overflow-x-auto rounded-lg border border-line bg-raised">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Your API tokens</caption>
           <thead className="bg-sunken text-2xs uppercase tracking-wide text-muted">

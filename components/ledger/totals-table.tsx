@@ -6,7 +6,7 @@ const cell = (v: number) => (v === 0 ? "—" : formatDuration(v));
 /** Partner or semester lines: sums of their programs' lines. */
 export function TotalsTable({ caption, rows, total }: { caption: string; rows: Array<Balance & { key: string; label: string }>; total?: Balance }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-raised">
+    <div className="scroll-cue overflow-x-auto rounded-lg border border-line bg-raised">
       <table className="w-full text-left text-sm">
         <caption className="px-3 pt-2 text-left text-xs font-semibold uppercase tracking-wide text-muted">{caption}</caption>
         <thead className="text-2xs uppercase tracking-wide text-muted">

@@ -99,7 +99,7 @@ export function DataTable<T>({
         </p>
       </div>
 
-      <div className="overflow-x-auto rounded-lg border border-line bg-raised">
+      <div className="scroll-cue overflow-x-auto rounded-lg border border-line bg-raised">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">{caption}</caption>
           <thead className="bg-sunken text-2xs uppercase tracking-wide text-muted">
